@@ -1,0 +1,26 @@
+import type { Metadata } from "next";
+import localFont from "next/font/local";
+import "./globals.css";
+
+const leewaySans = localFont({
+  src: [
+    { path: "../fonts/source-sans-3-latin-400-normal.woff2", weight: "400", style: "normal" },
+    { path: "../fonts/source-sans-3-latin-600-normal.woff2", weight: "600", style: "normal" },
+    { path: "../fonts/source-sans-3-latin-700-normal.woff2", weight: "700", style: "normal" },
+  ],
+  variable: "--font-leeway",
+  display: "swap",
+});
+
+export const metadata: Metadata = {
+  title: { default: "Leeway", template: "%s · Leeway" },
+  description: "Earthquake early-warning planning workspace",
+};
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en" className={leewaySans.variable}>
+      <body className="min-h-screen antialiased">{children}</body>
+    </html>
+  );
+}

@@ -1,0 +1,20 @@
+// Bundles the command-line entry point into one ES module so `npm run leeway` starts fast
+// (no TypeScript compilation at run time). Runs on `npm ci` through the `prepare` script.
+import { build } from "esbuild";
+import { existsSync } from "node:fs";
+
+const entry = "scripts/cli/main.ts";
+if (!existsSync(entry)) {
+  console.error(`bundle-cli: ${entry} not found; nothing to bundle`);
+  process.exit(0);
+}
+await build({
+  entryPoints: [entry],
+  outfile: "dist/cli/leeway.mjs",
+  bundle: true,
+  platform: "node",
+  format: "esm",
+  target: "node20",
+  logLevel: "warning",
+  banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
+});

@@ -1,0 +1,2 @@
+// Vitest runs server modules directly; the real "server-only" package throws outside React Server Components.
+export {};

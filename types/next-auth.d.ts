@@ -1,0 +1,19 @@
+import type { Role } from "@/db/schema";
+
+declare module "next-auth" {
+  interface User {
+    role: Role;
+    tokenVersion: number;
+  }
+  interface Session {
+    user: { id: number; role: Role; tokenVersion: number; name?: string | null; email?: string | null };
+  }
+}
+
+declare module "next-auth/jwt" {
+  interface JWT {
+    uid: number;
+    role: Role;
+    tokenVersion: number;
+  }
+}
