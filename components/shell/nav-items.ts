@@ -1,0 +1,11 @@
+import type { Permission } from "@/lib/auth/permissions";
+
+export interface NavItem {
+  href: string;
+  label: string;
+  /** Shown only to roles with this permission; the pages check it again on the server. */
+  permission?: Permission;
+}
+
+/** The workspace's sections, in the order they appear in the header. */
+export const NAV_ITEMS: NavItem[] = [{ href: "/scenarios", label: "Scenarios" }];
