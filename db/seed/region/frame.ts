@@ -41,6 +41,12 @@ export function offsetKm(from: KmPoint, azimuthDeg: number, distanceKm: number):
   return [from[0] + distanceKm * Math.sin(azimuthDeg * RAD), from[1] + distanceKm * Math.cos(azimuthDeg * RAD)];
 }
 
+/** Rounds degrees to `decimals` places (5 places ≈ 1 m), so stored coordinates read cleanly. */
+export function roundDeg(deg: number, decimals = 5): number {
+  const scale = 10 ** decimals;
+  return Math.round(deg * scale) / scale;
+}
+
 /** Straight-line distance in the local plane, km. */
 export function planeDistanceKm(a: KmPoint, b: KmPoint): number {
   return Math.hypot(a[0] - b[0], a[1] - b[1]);

@@ -1,4 +1,4 @@
-import { offsetKm, toLonLat, type KmPoint } from "./frame";
+import { offsetKm, roundDeg, toLonLat, type KmPoint } from "./frame";
 
 /** Fault types of the scenario file (lib/scenario). */
 export type FaultType = "crustal" | "interplate" | "intraslab";
@@ -41,7 +41,7 @@ function halfWidthHorizontalKm(r: Rupture): number {
 
 function sourceAt(epicentreKm: KmPoint, fields: Omit<RegionSource, "lon" | "lat">): RegionSource {
   const [lon, lat] = toLonLat(epicentreKm);
-  return { ...fields, lon, lat };
+  return { ...fields, lon: roundDeg(lon, 4), lat: roundDeg(lat, 4) };
 }
 
 /**
@@ -54,7 +54,6 @@ export function placeSources(vantorelKm: KmPoint): RegionSource[] {
   const topEdgeOffshoreKm = 185;
   // The rupture's top edge lies 185 km west-north-west of the island's centre; its centre is down-dip from there.
   const interfaceEpicentre = offsetKm([0, 0], TRENCH_STRIKE_DEG + 90, -topEdgeOffshoreKm + halfWidthHorizontalKm(trenchInterface));
-  const topDepthKm = 6;
 
   const crustalRupture: Rupture = { strikeDeg: 40, dipDeg: 80, lengthKm: 43, widthKm: 16 };
   const crustalEpicentre = offsetKm(vantorelKm, 225, 12);
@@ -67,7 +66,8 @@ export function placeSources(vantorelKm: KmPoint): RegionSource[] {
       key: "interface",
       name: "Western trench, Mw 8.4",
       description: "A great subduction-interface rupture off Tessarine's west coast, 320 km along the trench.",
-      depthKm: topDepthKm + (trenchInterface.widthKm / 2) * Math.sin((trenchInterface.dipDeg * Math.PI) / 180),
+      // The rupture's centre sits 20 km deep: its top edge is then 5.5 km below the sea floor's datum.
+      depthKm: 20,
       mw: 8.4,
       faultType: "interplate",
       mechanism: "reverse",

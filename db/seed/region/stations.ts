@@ -1,5 +1,5 @@
 import type { Coastline } from "./coastline";
-import { offsetKm, planeDistanceKm, toLonLat, type KmPoint } from "./frame";
+import { offsetKm, planeDistanceKm, roundDeg, toLonLat, type KmPoint } from "./frame";
 import { STATION_CODE_PREFIX } from "./names";
 import { uniform, type Random } from "./prng";
 
@@ -62,6 +62,6 @@ export function placeStations(coast: Coastline, townCentresKm: readonly KmPoint[
 
   return placed.map((s, i) => {
     const [lon, lat] = toLonLat(s.km);
-    return { code: `${STATION_CODE_PREFIX}${String(i + 1).padStart(2, "0")}`, lon, lat, operating: s.operating };
+    return { code: `${STATION_CODE_PREFIX}${String(i + 1).padStart(2, "0")}`, lon: roundDeg(lon), lat: roundDeg(lat), operating: s.operating };
   });
 }
