@@ -1,0 +1,142 @@
+"use client";
+
+import type { GeoJSONSource, Map as MapLibreMap } from "maplibre-gl";
+import "maplibre-gl/dist/maplibre-gl.css";
+import { useEffect, useRef, useState } from "react";
+import { CAUTION } from "@/lib/caution";
+import { sourcesToGeoJson, stationsToGeoJson, type MapSource, type MapStation } from "@/lib/map/overlays";
+import { BASEMAP_BOUNDS, buildMapStyle } from "@/lib/map/style";
+import { OVERLAY_SOURCE_IDS, REGION_MAP_LAYERS } from "./layers";
+import { MapLegend } from "./map-legend";
+
+export type { MapSource, MapStation } from "@/lib/map/overlays";
+
+declare global {
+  interface Window {
+    /** The most recently created Leeway map, for browser tests and debugging (see RegionMap). */
+    __leewayMap?: MapLibreMap;
+  }
+}
+
+/** Props of {@link RegionMap}. */
+export interface RegionMapProps {
+  stations: MapStation[];
+  sources: MapSource[];
+  /** [west, south, east, north] to fit on first load, degrees; defaults to the whole basemap. */
+  bounds?: [number, number, number, number];
+  /** The "how it was made" line shown under the map, after the basemap's own. */
+  provenance?: string;
+  /** Drawn over the map, top left (panels, extra legends). */
+  children?: React.ReactNode;
+}
+
+/** Puts the stations and sources into the map's GeoJSON sources (a no-op until the style has loaded). */
+function applyOverlays(map: MapLibreMap, overlay: { stations: MapStation[]; sources: MapSource[] }) {
+  map.getSource<GeoJSONSource>(OVERLAY_SOURCE_IDS.stations)?.setData(stationsToGeoJson(overlay.stations));
+  map.getSource<GeoJSONSource>(OVERLAY_SOURCE_IDS.sources)?.setData(sourcesToGeoJson(overlay.sources));
+}
+
+/** How far the view may wander past the basemap, degrees, so the island cannot be lost off-screen. */
+const PAN_MARGIN_DEG = 4;
+
+/**
+ * The map of the demo region: Leeway's own vector basemap with stations and sources on top, a scale
+ * bar, zoom buttons and a key. MapLibre is loaded in the browser only (it is ESM without a default
+ * export, and needs WebGL); its worker and fonts are served by the app.
+ *
+ * The container carries `data-testid="region-map"` and, once the map's first `idle` event has fired,
+ * `data-map-idle="true"`. The live map is also put on `window.__leewayMap` (always, not only in tests):
+ * browser tests query rendered features through it.
+ */
+export function RegionMap({ stations, sources, bounds, provenance, children }: RegionMapProps) {
+  const containerRef = useRef<HTMLDivElement>(null);
+  const mapRef = useRef<MapLibreMap | null>(null);
+  // The latest overlay data: the map is created asynchronously (after the import) and reads it then.
+  const overlayRef = useRef({ stations, sources });
+  const initialBounds = useRef(bounds ?? BASEMAP_BOUNDS);
+  const [idle, setIdle] = useState(false);
+  const [failure, setFailure] = useState<string | null>(null);
+
+  useEffect(() => {
+    let disposed = false;
+    let created: MapLibreMap | null = null;
+    (async () => {
+      const maplibregl = await import("maplibre-gl");
+      const container = containerRef.current;
+      if (disposed || !container) return;
+      maplibregl.setWorkerUrl("/maplibre-gl-worker.mjs");
+      const [w, s, e, n] = BASEMAP_BOUNDS;
+      const map = new maplibregl.Map({
+        container,
+        style: buildMapStyle({
+          origin: window.location.origin,
+          layers: REGION_MAP_LAYERS,
+          sources: {
+            [OVERLAY_SOURCE_IDS.stations]: { type: "geojson", data: stationsToGeoJson(overlayRef.current.stations) },
+            [OVERLAY_SOURCE_IDS.sources]: { type: "geojson", data: sourcesToGeoJson(overlayRef.current.sources) },
+          },
+        }),
+        bounds: initialBounds.current,
+        fitBoundsOptions: { padding: 24 },
+        maxBounds: [w - PAN_MARGIN_DEG, s - PAN_MARGIN_DEG, e + PAN_MARGIN_DEG, n + PAN_MARGIN_DEG],
+        minZoom: 4,
+        maxZoom: 14,
+        // Tests and the map-sheet export read the canvas back.
+        canvasContextAttributes: { preserveDrawingBuffer: true },
+        attributionControl: { compact: true },
+      });
+      created = map;
+      mapRef.current = map;
+      window.__leewayMap = map;
+      map.addControl(new maplibregl.NavigationControl({ visualizePitch: false }), "top-right");
+      map.addControl(new maplibregl.ScaleControl({ maxWidth: 140, unit: "metric" }), "bottom-left");
+      // Props that changed while the style was loading have no source to go to yet: apply them now.
+      map.once("load", () => applyOverlays(map, overlayRef.current));
+      map.once("idle", () => setIdle(true));
+      map.on("error", (event) => console.error("map:", event.error?.message ?? event));
+    })().catch((error: unknown) => setFailure(error instanceof Error ? error.message : String(error)));
+
+    return () => {
+      disposed = true;
+      created?.remove();
+      if (window.__leewayMap === created) delete window.__leewayMap;
+      mapRef.current = null;
+    };
+  }, []);
+
+  useEffect(() => {
+    overlayRef.current = { stations, sources };
+    if (mapRef.current) applyOverlays(mapRef.current, overlayRef.current);
+  }, [stations, sources]);
+
+  return (
+    <figure className="space-y-2">
+      <div className="relative h-[34rem] overflow-hidden rounded-card border border-line bg-tide-soft">
+        <div
+          ref={containerRef}
+          className="absolute inset-0"
+          data-testid="region-map"
+          data-map-idle={idle ? "true" : "false"}
+          role="region"
+          aria-label="Map of the demo region with stations and sources"
+        />
+        {failure && (
+          <p role="alert" className="absolute inset-x-4 top-4 rounded-card bg-error-bg p-3 text-sm text-error-ink">
+            The map could not start in this browser: {failure}
+          </p>
+        )}
+        {children && <div className="pointer-events-none absolute left-3 top-3 [&>*]:pointer-events-auto">{children}</div>}
+        <div className="absolute bottom-9 right-3">
+          <MapLegend />
+        </div>
+      </div>
+      <figcaption className="space-y-1 text-xs text-ink-muted">
+        <p data-testid="map-caution">{CAUTION}</p>
+        <p>
+          Basemap: Leeway&apos;s own vector tiles of an invented island; no real place is shown.
+          {provenance ? ` ${provenance}` : ""}
+        </p>
+      </figcaption>
+    </figure>
+  );
+}
