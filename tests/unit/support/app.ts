@@ -13,7 +13,7 @@ import { migrate } from "drizzle-orm/libsql/migrator";
 import { afterAll, vi } from "vitest";
 import type { SMTPServer } from "smtp-server";
 import { client, db } from "@/db/client";
-import { layers, layerVersions, scenarios, scenarioVersions, users, type Role, type User } from "@/db/schema";
+import { layers, layerVersions, outbox, scenarios, scenarioVersions, users, type Role, type User } from "@/db/schema";
 import { createFakeSmtpServer } from "@/lib/mail/fake-smtp-server";
 import { TEST_DATABASE_FILE } from "./test-env";
 
@@ -151,6 +151,18 @@ export const app = {
       server.listen(Number(process.env.SMTP_PORT), "127.0.0.1", resolve);
     });
     mailServer = server;
+  },
+
+  /** Waits until the outbox holds `count` messages (mail sent after an action has answered), then returns them. */
+  async waitForMail(count: number, timeoutMs = 5_000) {
+    // performance.now, not Date: tests may freeze Date with fake timers.
+    const started = performance.now();
+    while (performance.now() - started < timeoutMs) {
+      const rows = await db.select().from(outbox).orderBy(outbox.id);
+      if (rows.length >= count) return rows;
+      await new Promise((resolve) => setTimeout(resolve, 25));
+    }
+    throw new Error(`The outbox did not reach ${count} message(s) within ${timeoutMs} ms.`);
   },
 
   /** Row count of a table, for "nothing was written" checks. */
