@@ -6,8 +6,10 @@ import { formatBytes, LAYER_LIMITS } from "./limits";
 /** Refuses a file larger than the kind's limit, before any of it is read. */
 export function checkLayerFileSize(kind: LayerKind, byteLength: number, maxBytes = LAYER_LIMITS[kind].maxBytes): void {
   if (byteLength > maxBytes) {
+    // Just over the limit both round to the same "2 MB"; then the exact count shows the difference.
+    const size = formatBytes(byteLength) === formatBytes(maxBytes) ? `${byteLength.toLocaleString("en")} bytes` : formatBytes(byteLength);
     throw new LayerFileError(
-      `The file is ${formatBytes(byteLength)}; Leeway accepts at most ${formatBytes(maxBytes)} for a ${LAYER_KIND_LABELS[kind].toLowerCase()} layer. Nothing was saved.`,
+      `The file is ${size}; Leeway accepts at most ${formatBytes(maxBytes)} for a ${LAYER_KIND_LABELS[kind].toLowerCase()} layer. Nothing was saved.`,
       { kind: "too-large" },
     );
   }

@@ -2,13 +2,36 @@ import { length, lineString } from "@turf/turf";
 import { FACILITY_KINDS, type FacilityKind } from "@/db/schema";
 import type { ParsedLayer } from "./parsed-layer";
 
-/** Figures kept with each layer version and shown in lists and previews. */
-export type LayerSummary =
-  | { kind: "population"; cells: number; totalPeople: number; fileDistricts: number | null }
-  | { kind: "site-condition"; cells: number; vs30MinMs: number; vs30MedianMs: number; vs30MaxMs: number }
-  | { kind: "districts"; names: string[] }
-  | { kind: "facilities"; byKind: Record<FacilityKind, number>; railKm: number }
-  | { kind: "stations"; stations: number; operating: number };
+/**
+ * Figures kept with each layer version (`layer_versions.summary`) and shown in lists and previews.
+ * Names match what the demo seed and the publishing headline read (`totalPopulation`, `minVs30Ms`, …).
+ */
+export interface PopulationSummary {
+  cells: number;
+  totalPopulation: number;
+  /** Distinct names in the file's `district` column; null when the file has none. */
+  fileDistricts: number | null;
+}
+export interface SiteConditionSummary {
+  cells: number;
+  minVs30Ms: number;
+  medianVs30Ms: number;
+  maxVs30Ms: number;
+}
+export interface DistrictsSummary {
+  districts: number;
+  names: string[];
+}
+export interface FacilitiesSummary {
+  byKind: Record<FacilityKind, number>;
+  /** Length of all rail segments along great circles (turf `length`), km. */
+  railKm: number;
+}
+export interface StationsSummary {
+  stations: number;
+  operating: number;
+}
+export type LayerSummary = PopulationSummary | SiteConditionSummary | DistrictsSummary | FacilitiesSummary | StationsSummary;
 
 function median(values: Float64Array): number {
   const sorted = Float64Array.from(values).sort();
@@ -26,7 +49,7 @@ function sum(values: Float64Array): number {
 export function summarizeLayer(layer: ParsedLayer): LayerSummary {
   switch (layer.kind) {
     case "population":
-      return { kind: "population", cells: layer.lon.length, totalPeople: sum(layer.people), fileDistricts: layer.fileDistricts?.names.length ?? null };
+      return { cells: layer.lon.length, totalPopulation: sum(layer.people), fileDistricts: layer.fileDistricts?.names.length ?? null };
     case "site-condition": {
       let min = Infinity;
       let max = -Infinity;
@@ -34,10 +57,10 @@ export function summarizeLayer(layer: ParsedLayer): LayerSummary {
         min = Math.min(min, v);
         max = Math.max(max, v);
       }
-      return { kind: "site-condition", cells: layer.lon.length, vs30MinMs: min, vs30MedianMs: median(layer.vs30Ms), vs30MaxMs: max };
+      return { cells: layer.lon.length, minVs30Ms: min, medianVs30Ms: median(layer.vs30Ms), maxVs30Ms: max };
     }
     case "districts":
-      return { kind: "districts", names: layer.districts.map((d) => d.name) };
+      return { districts: layer.districts.length, names: layer.districts.map((d) => d.name) };
     case "facilities": {
       const byKind = Object.fromEntries(FACILITY_KINDS.map((kind) => [kind, 0])) as Record<FacilityKind, number>;
       let railKm = 0;
@@ -45,10 +68,10 @@ export function summarizeLayer(layer: ParsedLayer): LayerSummary {
         byKind[facility.kind] += 1;
         if (facility.geometry.type === "LineString") railKm += length(lineString(facility.geometry.coordinates), { units: "kilometers" });
       }
-      return { kind: "facilities", byKind, railKm };
+      return { byKind, railKm };
     }
     case "stations":
-      return { kind: "stations", stations: layer.stations.length, operating: layer.stations.filter((s) => s.operating).length };
+      return { stations: layer.stations.length, operating: layer.stations.filter((s) => s.operating).length };
   }
 }
 
