@@ -1,0 +1,128 @@
+// The role × action matrix: one row per route handler method and per server action. The test
+// (role-matrix.test.ts) finds every route.ts and "use server" export on disk and fails, naming
+// the key, when one has no row here. Each case runs once per caller on a fresh fixture
+// (tests/unit/support/app.ts): the admin, planner, trainer and council member, and no session.
+//
+// Adding a row: copy the key the failure prints, say which brief row governs it (fromBrief) or
+// that any signed-in person may (signedIn), and give the request that should succeed.
+import { app, type Fixture } from "../support/app";
+import { issueAuthToken } from "@/db/queries/tokens";
+import { scenarios, scenarioVersions, users } from "@/db/schema";
+import { everyone, fromBrief, signedIn, type Expectation } from "./brief-roles";
+
+export interface RouteCase {
+  /** Shown in the test name when a row has several cases. */
+  name?: string;
+  /** Route params; may write rows first (runs after the fixture is reset, before signing in). */
+  params?: (fixture: Fixture) => Record<string, string | number> | Promise<Record<string, string | number>>;
+  query?: string;
+  body?: (fixture: Fixture) => unknown;
+  expect: Expectation;
+}
+
+export interface ActionCase {
+  name?: string;
+  /** The form fields; may write rows first. */
+  form: (fixture: Fixture) => Record<string, string | number> | Promise<Record<string, string | number>>;
+  expect: Expectation;
+}
+
+export type MatrixRow<C> = { cases: C[] } | { notCalledHere: string };
+
+/** A scenario that has only a draft version (so trainers and council may not see it at all). */
+async function draftOnlyScenario(fixture: Fixture) {
+  const [scenario] = await app.db.insert(scenarios).values({ name: "Draft only", createdBy: fixture.people.planner.id }).returning();
+  await app.db.insert(scenarioVersions).values({ scenarioId: scenario.id, number: 1, params: {}, authorId: fixture.people.planner.id });
+  return scenario.id;
+}
+
+/** Someone invited and not yet signed up, with a valid link of the given kind. */
+async function newPersonWithLink(kind: "invite" | "reset") {
+  const [person] = await app.db.insert(users).values({ email: `new-${kind}@fixture.example`, name: "New person", role: "council" }).returning();
+  const { token } = await issueAuthToken(app.db, { kind, userId: person.id });
+  return { person, token };
+}
+
+/** The form behind a link, filled in correctly. */
+async function newPasswordForm(kind: "invite" | "reset") {
+  const { token } = await newPersonWithLink(kind);
+  return { token, password: "a-long-new-password", confirm: "a-long-new-password" };
+}
+
+const versionParams = (number: keyof Fixture["versions"]) => (fixture: Fixture) => ({ scenarioId: fixture.scenarioId, number: fixture.versions[number] });
+
+export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
+  "GET /api/auth/[...nextauth]": {
+    notCalledHere: "next-auth's own handler needs Next's request scope; sign-in for every role is covered by tests/e2e and tests/unit/auth/sign-in-limit.test.ts",
+  },
+  "POST /api/auth/[...nextauth]": {
+    notCalledHere: "next-auth's own handler needs Next's request scope; sign-in for every role is covered by tests/e2e and tests/unit/auth/sign-in-limit.test.ts",
+  },
+  "GET /api/health": { cases: [{ expect: everyone(200) }] },
+  "GET /api/stations": { cases: [{ expect: signedIn(200) }] },
+  "GET /api/scenarios": { cases: [{ expect: signedIn(200) }] },
+  "GET /api/scenarios/[scenarioId]": {
+    cases: [
+      { name: "with a published version", params: (f) => ({ scenarioId: f.scenarioId }), expect: signedIn(200) },
+      {
+        name: "draft only",
+        params: async (f) => ({ scenarioId: await draftOnlyScenario(f) }),
+        expect: fromBrief("see draft scenarios", 200, { trainer: 403 }),
+      },
+    ],
+  },
+  "GET /api/scenarios/[scenarioId]/versions/[number]": {
+    cases: [
+      { name: "draft", params: versionParams("draft"), expect: fromBrief("see draft scenarios", 200, { trainer: 403 }) },
+      { name: "shared", params: versionParams("shared"), expect: fromBrief("see draft scenarios", 200, { trainer: 200 }) },
+      { name: "published", params: versionParams("published"), expect: fromBrief("see published scenarios, their exposure and council view", 200) },
+    ],
+  },
+  "POST /api/scenarios/[scenarioId]/versions/[number]/publish": {
+    cases: [{ params: versionParams("draft"), body: () => ({ note: "Matrix" }), expect: fromBrief("publish / unpublish to council (e-mails council members)", 200) }],
+  },
+  "DELETE /api/scenarios/[scenarioId]/versions/[number]/publish": {
+    cases: [{ params: versionParams("published"), body: () => ({ reason: "Matrix" }), expect: fromBrief("publish / unpublish to council (e-mails council members)", 200) }],
+  },
+  "POST /api/scenarios/[scenarioId]/versions/[number]/share": {
+    cases: [{ params: versionParams("draft"), expect: fromBrief("share a scenario for exercises (no e-mail to council)", 200) }],
+  },
+  "DELETE /api/scenarios/[scenarioId]/versions/[number]/share": {
+    cases: [{ params: versionParams("shared"), expect: fromBrief("share a scenario for exercises (no e-mail to council)", 200) }],
+  },
+};
+
+const PEOPLE = "people, roles, invitations, outbox, audit trail" as const;
+
+export const ACTION_MATRIX: Record<string, MatrixRow<ActionCase>> = {
+  "app/(workspace)/admin/people/actions.ts#invitePersonAction": {
+    cases: [{ form: () => ({ name: "Matrix Person", email: "matrix@fixture.example", role: "council" }), expect: fromBrief(PEOPLE, 200) }],
+  },
+  "app/(workspace)/admin/people/actions.ts#reinvitePersonAction": {
+    cases: [
+      {
+        form: async () => ({ userId: (await newPersonWithLink("invite")).person.id }),
+        expect: fromBrief(PEOPLE, 200),
+      },
+    ],
+  },
+  "app/(workspace)/admin/people/actions.ts#changeRoleAction": {
+    cases: [{ form: (f) => ({ userId: f.people.trainer.id, role: "planner" }), expect: fromBrief(PEOPLE, 200) }],
+  },
+  "app/(workspace)/admin/people/actions.ts#setActiveAction": {
+    cases: [{ form: (f) => ({ userId: f.people.trainer.id, active: "false" }), expect: fromBrief(PEOPLE, 200) }],
+  },
+  "app/(workspace)/admin/people/actions.ts#sendResetLinkAction": {
+    cases: [{ form: (f) => ({ userId: f.people.trainer.id }), expect: fromBrief(PEOPLE, 200) }],
+  },
+  // Links from e-mails are used before signing in: the link itself is the credential.
+  "app/(auth)/invite/actions.ts#acceptInvitationAction": {
+    cases: [{ form: () => newPasswordForm("invite"), expect: everyone(200) }],
+  },
+  "app/(auth)/reset-password/actions.ts#requestPasswordResetAction": {
+    cases: [{ form: (f) => ({ email: f.people.council.email }), expect: everyone(200) }],
+  },
+  "app/(auth)/reset-password/actions.ts#resetPasswordAction": {
+    cases: [{ form: () => newPasswordForm("reset"), expect: everyone(200) }],
+  },
+};
