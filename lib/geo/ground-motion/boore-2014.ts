@@ -14,7 +14,8 @@
  */
 import type { GroundMotionModel, Mechanism, ModelEarthquake, PreparedGroundMotion } from "./types";
 
-interface Boore2014Coefficients {
+/** One column of the coefficient table. */
+export interface Boore2014Coefficients {
   /** e0 unspecified, e1 strike-slip, e2 normal, e3 reverse. */
   e: Record<Mechanism, number>;
   e4: number;
@@ -85,8 +86,8 @@ function siteTerm(k: Boore2014Coefficients, vs30Ms: number, pgaRockG: number): n
   return linear + REFERENCE.f1 + f2 * Math.log((pgaRockG + REFERENCE.f3G) / REFERENCE.f3G);
 }
 
-/** Aleatory sigma in ln units: φ(M, R_JB, Vs30) and τ(M) (eqs. 9–11). */
-function sigmaLn(k: Boore2014Coefficients, mw: number, joynerBooreKm: number, vs30Ms: number): number {
+/** Aleatory sigma in ln units from φ(M, R_JB, Vs30) and τ(M) (eqs. 9–11). */
+export function boore2014SigmaLn(k: Boore2014Coefficients, mw: number, joynerBooreKm: number, vs30Ms: number): number {
   const weight = Math.min(1, Math.max(0, mw - 4.5));
   let phi = k.phi1 + (k.phi2 - k.phi1) * weight;
   const tau = k.tau1 + (k.tau2 - k.tau1) * weight;
@@ -110,7 +111,7 @@ function prepare(earthquake: ModelEarthquake): PreparedGroundMotion {
       const lnRock = pgaSource + pathTerm(pga, mw, joynerBooreKm);
       return (lnRock + siteTerm(pga, vs30Ms, Math.exp(lnRock))) / LN10 + Math.log10(G_CMS2);
     },
-    sigmaLog10Pgv: (joynerBooreKm, vs30Ms) => sigmaLn(pgv, mw, joynerBooreKm, vs30Ms) / LN10,
+    sigmaLog10Pgv: (joynerBooreKm, vs30Ms) => boore2014SigmaLn(pgv, mw, joynerBooreKm, vs30Ms) / LN10,
     dataLimitKm: 400,
     magnitudeExtrapolated: mw < 3 || mw > 8.5,
   };

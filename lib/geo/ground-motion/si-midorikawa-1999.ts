@@ -46,19 +46,33 @@ export function siMidorikawaDataLimitKm(mw: number): number {
   return 100;
 }
 
-function prepare(earthquake: ModelEarthquake): PreparedGroundMotion {
+/** The magnitude-dependent terms of both equations for one earthquake. */
+function constants(earthquake: ModelEarthquake) {
   const c = SI_MIDORIKAWA_1999;
   const mw = Math.min(earthquake.mw, c.mwCap);
   const fault = c.faultTerms[earthquake.faultType];
   const nearSourceScale = 10 ** (c.nearSourceMagnitudeScale * mw);
-  const pgvConstant = c.pgv.magnitude * mw + c.pgv.depth * earthquake.depthKm + fault.pgv + c.pgv.constant;
-  const pgvNear = c.pgv.nearSource * nearSourceScale;
-  const pgaConstant = c.pga.magnitude * mw + c.pga.depth * earthquake.depthKm + fault.pga + c.pga.constant;
-  const pgaNear = c.pga.nearSource * nearSourceScale;
+  return {
+    pgv: c.pgv.magnitude * mw + c.pgv.depth * earthquake.depthKm + fault.pgv + c.pgv.constant,
+    pgvNear: c.pgv.nearSource * nearSourceScale,
+    pga: c.pga.magnitude * mw + c.pga.depth * earthquake.depthKm + fault.pga + c.pga.constant,
+    pgaNear: c.pga.nearSource * nearSourceScale,
+  };
+}
+
+/** log10 PGV600 (cm/s) on engineering bedrock at rupture distance `distanceKm` (the PGV equation above). */
+export function siMidorikawaLog10Pgv600(earthquake: ModelEarthquake, distanceKm: number): number {
+  const k = constants(earthquake);
+  return k.pgv - Math.log10(distanceKm + k.pgvNear) - SI_MIDORIKAWA_1999.pgv.anelastic * distanceKm;
+}
+
+function prepare(earthquake: ModelEarthquake): PreparedGroundMotion {
+  const c = SI_MIDORIKAWA_1999;
+  const k = constants(earthquake);
   return {
     log10PgvCms: (distanceKm, vs30Ms) =>
-      pgvConstant - Math.log10(distanceKm + pgvNear) - c.pgv.anelastic * distanceKm + log10AmplificationRatio(vs30Ms),
-    log10PgaCms2: (distanceKm) => pgaConstant - Math.log10(distanceKm + pgaNear) - c.pga.anelastic * distanceKm,
+      k.pgv - Math.log10(distanceKm + k.pgvNear) - c.pgv.anelastic * distanceKm + log10AmplificationRatio(vs30Ms),
+    log10PgaCms2: (distanceKm) => k.pga - Math.log10(distanceKm + k.pgaNear) - c.pga.anelastic * distanceKm,
     sigmaLog10Pgv: () => c.sigmaLog10.pgv,
     dataLimitKm: siMidorikawaDataLimitKm(earthquake.mw),
     magnitudeExtrapolated: earthquake.mw > c.mwCap,
