@@ -12,7 +12,7 @@ import { MAP_COLOURS as C } from "@/lib/map/palette";
 import { BASEMAP_SOURCE_ID } from "@/lib/map/style";
 
 /** Ids of the GeoJSON sources the map component fills from its props. */
-export const OVERLAY_SOURCE_IDS = { stations: "stations", sources: "sources" } as const;
+export const OVERLAY_SOURCE_IDS = { stations: "stations", sources: "sources", layer: "layer-overlay" } as const;
 
 /** Stable layer ids: tests, legends and later overlays refer to these. */
 export const MAP_LAYER_IDS = {
@@ -25,6 +25,9 @@ export const MAP_LAYER_IDS = {
   railCasing: "rail-casing",
   railTies: "rail-ties",
   townDots: "town-dots",
+  layerFill: "layer-fill",
+  layerLines: "layer-lines",
+  layerPoints: "layer-points",
   stations: "stations",
   sourceRings: "source-rings",
   sourceDots: "source-dots",
@@ -100,6 +103,40 @@ const townDots: CircleLayerSpecification = {
     "circle-radius": byZoom(5, townSize(3.5, 2.5), 11, townSize(6, 4.5)),
     "circle-stroke-color": C.labelHalo,
     "circle-stroke-width": 1.5,
+  },
+};
+
+const isArea: ExpressionSpecification = ["match", ["geometry-type"], ["Polygon", "MultiPolygon"], true, false];
+const isPoint: ExpressionSpecification = ["match", ["geometry-type"], ["Point", "MultiPoint"], true, false];
+
+/** An uploaded layer (components/layers): districts as light fills with outlines, rail as lines, cells and facilities as dots. */
+const layerFill: FillLayerSpecification = {
+  id: MAP_LAYER_IDS.layerFill,
+  type: "fill",
+  source: OVERLAY_SOURCE_IDS.layer,
+  filter: isArea,
+  paint: { "fill-color": C.layerOverlay, "fill-opacity": 0.12 },
+};
+
+const layerLines: LineLayerSpecification = {
+  id: MAP_LAYER_IDS.layerLines,
+  type: "line",
+  source: OVERLAY_SOURCE_IDS.layer,
+  filter: ["!", isPoint],
+  layout: { "line-join": "round" },
+  paint: { "line-color": C.layerOverlay, "line-width": byZoom(5, 1.2, 11, 2.5) },
+};
+
+const layerPoints: CircleLayerSpecification = {
+  id: MAP_LAYER_IDS.layerPoints,
+  type: "circle",
+  source: OVERLAY_SOURCE_IDS.layer,
+  filter: isPoint,
+  paint: {
+    "circle-radius": byZoom(5, 1.8, 11, 4.5),
+    "circle-color": C.layerOverlay,
+    "circle-stroke-color": C.layerOverlayOutline,
+    "circle-stroke-width": byZoom(5, 0.3, 11, 1),
   },
 };
 
@@ -192,7 +229,7 @@ const sourceLabels: SymbolLayerSpecification = {
   paint: { "text-color": C.source, "text-halo-color": C.sourceHalo, "text-halo-width": 1.6 },
 };
 
-/** The map's layers, bottom to top: basemap, then stations and sources, then labels (top ones are placed first). */
+/** The map's layers, bottom to top: basemap, an uploaded layer, stations and sources, then labels (top ones are placed first). */
 export const REGION_MAP_LAYERS: LayerSpecification[] = [
   sea,
   shelf(MAP_LAYER_IDS.shelfOuter, 0, C.shelfOuter),
@@ -203,6 +240,9 @@ export const REGION_MAP_LAYERS: LayerSpecification[] = [
   railCasing,
   railTies,
   townDots,
+  layerFill,
+  layerLines,
+  layerPoints,
   stations,
   sourceRings,
   sourceDots,

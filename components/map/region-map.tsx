@@ -1,5 +1,6 @@
 "use client";
 
+import type { FeatureCollection } from "geojson";
 import type { GeoJSONSource, Map as MapLibreMap } from "maplibre-gl";
 import "maplibre-gl/dist/maplibre-gl.css";
 import { useEffect, useRef, useState } from "react";
@@ -26,14 +27,19 @@ export interface RegionMapProps {
   bounds?: [number, number, number, number];
   /** The "how it was made" line shown under the map, after the basemap's own. */
   provenance?: string;
+  /** An uploaded layer to draw over the basemap (polygons, lines, points), e.g. for checking an upload. */
+  overlay?: FeatureCollection;
   /** Drawn over the map, top left (panels, extra legends). */
   children?: React.ReactNode;
 }
 
-/** Puts the stations and sources into the map's GeoJSON sources (a no-op until the style has loaded). */
-function applyOverlays(map: MapLibreMap, overlay: { stations: MapStation[]; sources: MapSource[] }) {
+const NO_FEATURES: FeatureCollection = { type: "FeatureCollection", features: [] };
+
+/** Puts the stations, sources and any layer overlay into the map's GeoJSON sources (a no-op until the style has loaded). */
+function applyOverlays(map: MapLibreMap, overlay: { stations: MapStation[]; sources: MapSource[]; layer?: FeatureCollection }) {
   map.getSource<GeoJSONSource>(OVERLAY_SOURCE_IDS.stations)?.setData(stationsToGeoJson(overlay.stations));
   map.getSource<GeoJSONSource>(OVERLAY_SOURCE_IDS.sources)?.setData(sourcesToGeoJson(overlay.sources));
+  map.getSource<GeoJSONSource>(OVERLAY_SOURCE_IDS.layer)?.setData(overlay.layer ?? NO_FEATURES);
 }
 
 /** How far the view may wander past the basemap, degrees, so the island cannot be lost off-screen. */
@@ -48,11 +54,11 @@ const PAN_MARGIN_DEG = 4;
  * `data-map-idle="true"`. The live map is also put on `window.__leewayMap` (always, not only in tests):
  * browser tests query rendered features through it.
  */
-export function RegionMap({ stations, sources, bounds, provenance, children }: RegionMapProps) {
+export function RegionMap({ stations, sources, bounds, provenance, overlay, children }: RegionMapProps) {
   const containerRef = useRef<HTMLDivElement>(null);
   const mapRef = useRef<MapLibreMap | null>(null);
   // The latest overlay data: the map is created asynchronously (after the import) and reads it then.
-  const overlayRef = useRef({ stations, sources });
+  const overlayRef = useRef({ stations, sources, layer: overlay });
   const initialBounds = useRef(bounds ?? BASEMAP_BOUNDS);
   const [idle, setIdle] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
@@ -74,6 +80,7 @@ export function RegionMap({ stations, sources, bounds, provenance, children }: R
           sources: {
             [OVERLAY_SOURCE_IDS.stations]: { type: "geojson", data: stationsToGeoJson(overlayRef.current.stations) },
             [OVERLAY_SOURCE_IDS.sources]: { type: "geojson", data: sourcesToGeoJson(overlayRef.current.sources) },
+            [OVERLAY_SOURCE_IDS.layer]: { type: "geojson", data: overlayRef.current.layer ?? NO_FEATURES },
           },
         }),
         bounds: initialBounds.current,
@@ -105,9 +112,9 @@ export function RegionMap({ stations, sources, bounds, provenance, children }: R
   }, []);
 
   useEffect(() => {
-    overlayRef.current = { stations, sources };
+    overlayRef.current = { stations, sources, layer: overlay };
     if (mapRef.current) applyOverlays(mapRef.current, overlayRef.current);
-  }, [stations, sources]);
+  }, [stations, sources, overlay]);
 
   return (
     <figure className="space-y-2">

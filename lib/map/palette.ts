@@ -21,6 +21,9 @@ export const MAP_COLOURS = {
   stationOffOutline: "#6f7f86",
   source: "#a13f27",
   sourceHalo: "#fbf3ef",
+  /** An uploaded layer drawn for checking (components/layers): a muted violet apart from stations and sources. */
+  layerOverlay: "#5a4f8c",
+  layerOverlayOutline: "#ffffff",
 } as const;
 
 export type MapColour = keyof typeof MAP_COLOURS;

@@ -17,6 +17,7 @@ const style = buildMapStyle({
   sources: {
     [OVERLAY_SOURCE_IDS.stations]: { type: "geojson", data: { type: "FeatureCollection", features: [] } },
     [OVERLAY_SOURCE_IDS.sources]: { type: "geojson", data: { type: "FeatureCollection", features: [] } },
+    [OVERLAY_SOURCE_IDS.layer]: { type: "geojson", data: { type: "FeatureCollection", features: [] } },
   },
 });
 
