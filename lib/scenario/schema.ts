@@ -80,7 +80,12 @@ const alertSchema = z.strictObject({
 
 const vs30Ms = finite("Vs30").min(100, "Vs30 must be between 100 and 1500 m/s").max(1500, "Vs30 must be between 100 and 1500 m/s");
 
-const vs30CellSchema = z.strictObject({ lon: lonDeg, lat: latDeg, vs30: vs30Ms });
+// Same range as site-condition uploads; values outside the models' 100–1500 m/s are clipped when computing.
+const vs30CellSchema = z.strictObject({
+  lon: lonDeg,
+  lat: latDeg,
+  vs30: finite("Vs30").min(50, "Vs30 must be between 50 and 4000 m/s").max(4000, "Vs30 must be between 50 and 4000 m/s"),
+});
 
 const areaSchema = z.strictObject({
   bbox: z.tuple([

@@ -1,0 +1,200 @@
+/**
+ * Binds a scenario to everything the per-place calculation needs: velocity model and travel-time
+ * tables, source geometry, ground-motion model, intensity scale, site conditions, the alert
+ * timeline and the alert strategy. Built once per computation; pure and deterministic.
+ */
+import type { Scenario } from "@/lib/scenario/schema";
+import { DEFAULT_DELAYS_NOTE } from "@/lib/scenario/defaults";
+import { resolveScenario, type ResolvedScenario } from "@/lib/scenario/resolve";
+import { nearestPointInBbox } from "./area-nearest";
+import { lambertDistanceKm } from "./distance";
+import { getGroundMotionModel } from "./ground-motion/registry";
+import type { GroundMotionModel, ModelEarthquake, PreparedGroundMotion } from "./ground-motion/types";
+import { getIntensityScale, type IntensityScale } from "./intensity/scales";
+import { localOffsetKm } from "./local-frame";
+import { LEEWAY_VERSION, type Provenance, type ProvenanceContext } from "./provenance";
+import { pointSource } from "./source/point-source";
+import { createSourceDistances, type SourceGeometry } from "./source/types";
+import { sourceStrategy } from "./strategy/source-strategy";
+import type { AlertStrategy } from "./strategy/types";
+import { computeAlertTimeline, type AlertTimeline } from "./timeline";
+import { homogeneousModel, layeredModel, type VelocityModel } from "./velocity/models";
+import { firstArrival } from "./velocity/ray-travel-time";
+import { buildTravelTimeTable, type TravelTimeTable } from "./velocity/travel-time-table";
+import { buildVs30Lookup, type Vs30Cells, type Vs30Lookup } from "./vs30";
+
+/** Options every engine entry point accepts besides the scenario. */
+export interface EngineOptions extends ProvenanceContext {
+  /** Vs30 grid as typed arrays (e.g. a site-condition layer); takes the place of the scenario's `vs30Grid`. */
+  vs30Cells?: Vs30Cells;
+}
+
+/** Everything bound to one scenario. */
+export interface Engine {
+  scenario: ResolvedScenario;
+  velocityModel: VelocityModel;
+  /** P and S first-arrival tables for the hypocentre depth. */
+  pTable: TravelTimeTable;
+  sTable: TravelTimeTable;
+  /** S table over the rupture's depth range, for peak shaking from finite ruptures (absent for a point source). */
+  peakSTable: TravelTimeTable | undefined;
+  /** Epicentral distance beyond which the first S is a head wave, km (Infinity for a homogeneous model). */
+  sHeadWaveFromKm: number;
+  source: SourceGeometry;
+  model: GroundMotionModel;
+  earthquake: ModelEarthquake;
+  motion: PreparedGroundMotion;
+  scale: IntensityScale;
+  vs30: Vs30Lookup;
+  timeline: AlertTimeline;
+  strategy: AlertStrategy;
+  /** log10 PGV (cm/s) that the scale maps to the `target` intensity. */
+  log10PgvTarget: number;
+  /** Statements every output using this engine carries (defaults used, approximations, statuses). */
+  notes: string[];
+  provenance: Provenance;
+}
+
+const TABLE_MARGIN_KM = 50;
+
+function velocityModelOf(scenario: ResolvedScenario): VelocityModel {
+  const vm = scenario.velocityModel;
+  return vm.kind === "homogeneous" ? homogeneousModel(vm.vpKms, vm.vsKms) : layeredModel(vm.name);
+}
+
+/** Largest epicentral distance the scenario's area and stations reach, km. */
+function reachKm(scenario: ResolvedScenario): number {
+  const { lon, lat } = scenario.source;
+  const [w, s, e, n] = scenario.area.bbox;
+  let reach = 0;
+  for (const x of [w, (w + e) / 2, e]) for (const y of [s, (s + n) / 2, n]) reach = Math.max(reach, lambertDistanceKm(lon, lat, x, y));
+  for (const station of scenario.stations) reach = Math.max(reach, lambertDistanceKm(lon, lat, station.lon, station.lat));
+  return reach;
+}
+
+/** Distance at which the first S wave turns into a head wave, km, to 0.01 km. */
+function sHeadWaveFromKm(model: VelocityModel, depthKm: number): number {
+  if (model.layers.length === 1) return Infinity;
+  const isHead = (x: number) => firstArrival(model, "S", x, depthKm).headInterfaceKm !== null;
+  let x = 0;
+  while (x <= 1000 && !isHead(x)) x += 5;
+  if (x > 1000) return Infinity;
+  let lo = Math.max(0, x - 5);
+  let hi = x;
+  while (hi - lo > 0.01) {
+    const mid = (lo + hi) / 2;
+    if (isHead(mid)) hi = mid;
+    else lo = mid;
+  }
+  return hi;
+}
+
+/** The smallest model distance from the source to any point of the area, km. */
+function nearestModelDistanceKm(scenario: ResolvedScenario, source: SourceGeometry, model: GroundMotionModel, candidates: [number, number][]): number {
+  const out = createSourceDistances();
+  let best = Infinity;
+  for (const [lon, lat] of candidates) {
+    const [x, y] = nearestPointInBbox(lon, lat, scenario.area.bbox);
+    const offset = localOffsetKm(scenario.source.lon, scenario.source.lat, x, y);
+    source.measure(offset.distanceKm, offset.eastKm, offset.northKm, out);
+    best = Math.min(best, model.distanceKind === "rupture" ? out.ruptureKm : out.joynerBooreKm);
+  }
+  return best;
+}
+
+function describeNotes(engine: Omit<Engine, "notes" | "provenance">): string[] {
+  const { scenario, model, scale, motion, vs30 } = engine;
+  const notes: string[] = [];
+  if (scenario.defaultsUsed.usesDefaultDelays) notes.push(`${DEFAULT_DELAYS_NOTE} (${scenario.defaultsUsed.delays.join(", ")})`);
+  if (scenario.defaultsUsed.alert.length) notes.push(`default alert thresholds (${scenario.defaultsUsed.alert.join(", ")})`);
+  if (engine.source.kind === "point" && scenario.source.mw >= 7) {
+    notes.push("point-source approximation: shaking along the fault is underestimated");
+  }
+  if (scenario.velocityModel.kind === "homogeneous" && scenario.source.depthKm > 35) {
+    notes.push("homogeneous velocity model for a source deeper than 35 km: travel times ignore the crust and mantle layers");
+  }
+  if (Number.isFinite(engine.sHeadWaveFromKm)) {
+    notes.push(
+      `beyond ${engine.sHeadWaveFromKm.toFixed(0)} km the first S is a head wave (Sn), weaker and earlier than the strong S: warning seconds there err on the short (safe) side`,
+    );
+  }
+  if (scale.conversion.status !== "checked") {
+    notes.push(`${scale.conversion.title}: status ${scale.conversion.status}; intensities below ${scale.publishedMinIntensity} are outside its published range`);
+  }
+  if (motion.magnitudeExtrapolated) notes.push(`Mw ${scenario.source.mw} is outside the data of ${model.title}`);
+  if (vs30.clipped) notes.push("some Vs30 values were clipped to 100–1500 m/s, the range the models were fitted on");
+  notes.push(`PGA: ${model.pgaNote}`);
+  notes.push(...engine.strategy.notes);
+  return notes;
+}
+
+function buildProvenance(engine: Omit<Engine, "notes" | "provenance">, context: ProvenanceContext): Provenance {
+  const { model, scale, velocityModel, scenario, strategy } = engine;
+  return {
+    leewayVersion: LEEWAY_VERSION,
+    groundMotionModel: { id: model.id, title: model.title, citation: model.citation, status: model.status },
+    amplification: model.amplification ?? { id: "model-site-term", title: `the site term of ${model.title}` },
+    conversion: scale.conversion,
+    velocityModel: { id: velocityModel.id, title: velocityModel.title, citation: velocityModel.citation, status: velocityModel.status },
+    alertStrategy: strategy.label,
+    scenario: { name: scenario.name ?? null, version: context.scenarioVersion ?? null },
+    layerVersions: { ...(context.layerVersions ?? {}) },
+    computedAt: context.computedAt ?? null,
+  };
+}
+
+/**
+ * Prepares a parsed scenario for computation. `extraPoints` (lon/lat pairs, e.g. sites outside
+ * the area) widen the travel-time tables so they stay interpolated there.
+ */
+export function prepareEngine(input: Scenario, options: EngineOptions = {}, extraPoints: readonly [number, number][] = []): Engine {
+  const scenario = resolveScenario(input);
+  const { source: src } = scenario;
+  const velocityModel = velocityModelOf(scenario);
+  let reach = reachKm(scenario);
+  for (const [lon, lat] of extraPoints) reach = Math.max(reach, lambertDistanceKm(src.lon, src.lat, lon, lat));
+  const tableOptions = { depthMinKm: src.depthKm, depthMaxKm: src.depthKm, maxDistanceKm: Math.hypot(reach + TABLE_MARGIN_KM, src.depthKm), distanceStepKm: 0.5 };
+  const pTable = buildTravelTimeTable(velocityModel, "P", tableOptions);
+  const sTable = buildTravelTimeTable(velocityModel, "S", tableOptions);
+  const source = pointSource(src.depthKm);
+  const model = getGroundMotionModel(scenario.groundMotionModel);
+  const earthquake: ModelEarthquake = { mw: src.mw, depthKm: src.depthKm, faultType: src.faultType, mechanism: src.mechanism };
+  const motion = model.prepare(earthquake);
+  const scale = getIntensityScale(scenario.intensityScale);
+  const grid = options.vs30Cells ?? (scenario.vs30Grid && {
+    lon: scenario.vs30Grid.map((c) => c.lon),
+    lat: scenario.vs30Grid.map((c) => c.lat),
+    vs30Ms: scenario.vs30Grid.map((c) => c.vs30),
+  });
+  const vs30 = buildVs30Lookup(scenario.vs30, grid || undefined);
+  const timeline = computeAlertTimeline(scenario, pTable);
+  const alertMagnitude = scenario.alert.magnitude === "growing" ? src.mw : scenario.alert.magnitude;
+  const strategy = sourceStrategy({
+    earthquake,
+    model,
+    scale,
+    issueAt: scenario.alert.issueAt,
+    areaAt: scenario.alert.areaAt,
+    updates: [{ issueS: timeline.alertIssuedS, mw: alertMagnitude }],
+    nearestModelDistanceKm: nearestModelDistanceKm(scenario, source, model, [[src.lon, src.lat]]),
+    softestVs30Ms: vs30.minVs30Ms,
+  });
+  const parts = {
+    scenario,
+    velocityModel,
+    pTable,
+    sTable,
+    peakSTable: undefined,
+    sHeadWaveFromKm: sHeadWaveFromKm(velocityModel, src.depthKm),
+    source,
+    model,
+    earthquake,
+    motion,
+    scale,
+    vs30,
+    timeline,
+    strategy,
+    log10PgvTarget: scale.log10PgvFor(scenario.alert.target),
+  };
+  return { ...parts, notes: describeNotes(parts), provenance: buildProvenance(parts, options) };
+}

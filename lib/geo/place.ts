@@ -1,0 +1,90 @@
+/**
+ * Everything Leeway computes for one place, in one allocation-free function shared by sites,
+ * grids and population cells — so the CLI, the worker and the server give identical numbers for
+ * the same point and distance.
+ */
+import type { Engine } from "./engine";
+import { createSourceDistances, type SourceDistances } from "./source/types";
+import { createPlaceAlert, type PlaceAlert, type PlaceAlertEvaluator } from "./strategy/types";
+import { probabilityOfExceedance } from "./uncertainty";
+
+/** Values for one place (s after origin, km, cm/s, intensity on the scenario's scale). */
+export interface PlaceValues extends SourceDistances {
+  epicentralKm: number;
+  /** The ground-motion model's distance (rupture or Joyner–Boore), km. */
+  modelDistanceKm: number;
+  pArrivalS: number;
+  /** First S arrival, s. */
+  sArrivalS: number;
+  /** Rupture time to the nearest rupture point plus S travel from there (= sArrivalS for a point source), s. */
+  peakShakingS: number;
+  /** True when the first S is a head wave (Sn): warning errs on the short side. */
+  sIsHeadWave: boolean;
+  vs30Ms: number;
+  log10PgvCms: number;
+  intensity: number;
+  /** Beyond the model's data (distance or magnitude). */
+  extrapolated: boolean;
+  alert: PlaceAlert;
+  /** Primary-channel alert time (issue + delivery), s; NaN when no alert can reach the place. */
+  alertS: number;
+  /** Primary-channel warning seconds: sArrivalS − alertS. */
+  warningS: number;
+}
+
+/** A zeroed `PlaceValues` to reuse in loops. */
+export function createPlaceValues(): PlaceValues {
+  return {
+    ...createSourceDistances(),
+    epicentralKm: 0,
+    modelDistanceKm: 0,
+    pArrivalS: 0,
+    sArrivalS: 0,
+    peakShakingS: 0,
+    sIsHeadWave: false,
+    vs30Ms: 0,
+    log10PgvCms: 0,
+    intensity: 0,
+    extrapolated: false,
+    alert: createPlaceAlert(),
+    alertS: Number.NaN,
+    warningS: Number.NaN,
+  };
+}
+
+/**
+ * Travel times, distances and median shaking (true Mw) for a surface place `epicentralKm` from
+ * the epicentre (east/north offsets for finite ruptures), on a site of `vs30Ms`.
+ */
+export function evaluateShaking(engine: Engine, epicentralKm: number, eastKm: number, northKm: number, vs30Ms: number, out: PlaceValues): void {
+  const depthKm = engine.scenario.source.depthKm;
+  engine.source.measure(epicentralKm, eastKm, northKm, out);
+  out.epicentralKm = epicentralKm;
+  out.pArrivalS = engine.pTable.timeS(epicentralKm, depthKm);
+  out.sArrivalS = engine.sTable.timeS(epicentralKm, depthKm);
+  out.peakShakingS = engine.source.kind === "point" ? out.sArrivalS : peakShakingS(engine, out);
+  out.sIsHeadWave = epicentralKm >= engine.sHeadWaveFromKm;
+  out.modelDistanceKm = engine.model.distanceKind === "rupture" ? out.ruptureKm : out.joynerBooreKm;
+  out.vs30Ms = vs30Ms;
+  out.log10PgvCms = engine.motion.log10PgvCms(out.modelDistanceKm, vs30Ms);
+  out.intensity = engine.scale.fromLog10Pgv(out.log10PgvCms);
+  out.extrapolated = out.modelDistanceKm > engine.motion.dataLimitKm || engine.motion.magnitudeExtrapolated;
+}
+
+/** Strong shaking from a finite rupture: rupture time to the nearest point + S travel from it. */
+function peakShakingS(engine: Engine, d: SourceDistances): number {
+  const table = engine.peakSTable;
+  return d.ruptureTimeS + (table ? table.timeS(d.nearestHorizontalKm, d.nearestDepthKm) : Number.NaN);
+}
+
+/** The alert decision and primary-channel warning for a place whose shaking is in `out`. */
+export function evaluateAlert(engine: Engine, evaluator: PlaceAlertEvaluator, index: number, lonDeg: number, latDeg: number, out: PlaceValues): void {
+  evaluator.evaluate(index, lonDeg, latDeg, out.modelDistanceKm, out.vs30Ms, out.intensity, out.alert);
+  out.alertS = out.alert.issueS + engine.timeline.channels[0].deliveryS;
+  out.warningS = out.sArrivalS - out.alertS;
+}
+
+/** P(intensity ≥ target) at a place from the model's sigma (ground-motion scatter only). */
+export function pExceedTarget(engine: Engine, out: PlaceValues): number {
+  return probabilityOfExceedance(out.log10PgvCms, engine.log10PgvTarget, engine.motion.sigmaLog10Pgv(out.modelDistanceKm, out.vs30Ms));
+}

@@ -1,0 +1,93 @@
+/**
+ * The source-based alert (METHODS.md §2): the system estimates the source, predicts intensity
+ * everywhere with the magnitude it has at alert time, issues an alert when the largest prediction
+ * in the area reaches `issueAt`, and sends it to places predicted at `areaAt` or more.
+ * With several updates (a magnitude that grows), a place is alerted by the first update that
+ * predicts `areaAt` there; predictions grow with magnitude, so the search is a bisection.
+ */
+import type { GroundMotionModel, ModelEarthquake, PreparedGroundMotion } from "../ground-motion/types";
+import type { IntensityScale } from "../intensity/scales";
+import type { AlertStrategy, AlertUpdate, PlaceAlert, PlaceAlertEvaluator } from "./types";
+
+/** What the source strategy needs from the prepared scenario. */
+export interface SourceStrategyInputs {
+  earthquake: ModelEarthquake;
+  model: GroundMotionModel;
+  scale: IntensityScale;
+  issueAt: number;
+  areaAt: number;
+  /** Alert messages in time order, with the magnitude each one uses. */
+  updates: AlertUpdate[];
+  /** The smallest model distance from the source to the area, km, and the softest Vs30 in it (m/s). */
+  nearestModelDistanceKm: number;
+  softestVs30Ms: number;
+}
+
+/** Builds the source-based strategy. */
+export function sourceStrategy(inputs: SourceStrategyInputs): AlertStrategy {
+  const { scale, updates, areaAt } = inputs;
+  const motions: PreparedGroundMotion[] = updates.map((u) => inputs.model.prepare({ ...inputs.earthquake, mw: u.mw }));
+  const usesTrueMagnitude = updates.map((u) => u.mw === inputs.earthquake.mw);
+  const peaks = motions.map((m) => scale.fromLog10Pgv(m.log10PgvCms(inputs.nearestModelDistanceKm, inputs.softestVs30Ms)));
+  const issueIndex = peaks.findIndex((peak) => peak >= inputs.issueAt);
+  const issued = issueIndex >= 0;
+  const decidingIndex = issued ? issueIndex : updates.length - 1;
+  const firstIssueS = updates[issued ? issueIndex : 0].issueS;
+  const last = updates.length - 1;
+
+  const predicted = (u: number, distanceKm: number, vs30Ms: number, trueIntensity: number) =>
+    usesTrueMagnitude[u] ? trueIntensity : scale.fromLog10Pgv(motions[u].log10PgvCms(distanceKm, vs30Ms));
+
+  const evaluator: PlaceAlertEvaluator = {
+    evaluate(_index, _lon, _lat, distanceKm, vs30Ms, trueIntensity, out: PlaceAlert) {
+      out.issueS = firstIssueS;
+      if (!issued) {
+        out.alerted = false;
+        out.predictedIntensity = predicted(decidingIndex, distanceKm, vs30Ms, trueIntensity);
+        out.alertMagnitude = updates[decidingIndex].mw;
+        return;
+      }
+      const atLast = predicted(last, distanceKm, vs30Ms, trueIntensity);
+      if (atLast < areaAt) {
+        out.alerted = false;
+        out.predictedIntensity = atLast;
+        out.alertMagnitude = updates[last].mw;
+        return;
+      }
+      let lo = issueIndex;
+      let hi = last;
+      let valueAtHi = atLast;
+      while (lo < hi) {
+        const mid = (lo + hi) >> 1;
+        const value = predicted(mid, distanceKm, vs30Ms, trueIntensity);
+        if (value >= areaAt) {
+          hi = mid;
+          valueAtHi = value;
+        } else lo = mid + 1;
+      }
+      out.alerted = true;
+      out.issueS = updates[hi].issueS;
+      out.predictedIntensity = valueAtHi;
+      out.alertMagnitude = updates[hi].mw;
+    },
+  };
+
+  const notes: string[] = [];
+  if (!issued) {
+    notes.push(
+      `no alert issued: the largest predicted intensity in the area (${peaks[decidingIndex].toFixed(2)}) is below the issue-at threshold (${inputs.issueAt})`,
+    );
+  }
+  const magnitudes = updates.length === 1 ? `Mw ${updates[0].mw.toFixed(1)}` : `Mw ${updates[0].mw.toFixed(1)} growing to ${updates[last].mw.toFixed(1)}`;
+  return {
+    id: "source",
+    label: `source-based (${magnitudes} at alert time)`,
+    issued,
+    firstIssueS,
+    peakPredictedIntensity: peaks[decidingIndex],
+    updates,
+    notes,
+    forPoints: () => evaluator,
+    forGrid: () => evaluator,
+  };
+}
