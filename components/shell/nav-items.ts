@@ -8,4 +8,9 @@ export interface NavItem {
 }
 
 /** The workspace's sections, in the order they appear in the header. */
-export const NAV_ITEMS: NavItem[] = [{ href: "/scenarios", label: "Scenarios" }];
+export const NAV_ITEMS: NavItem[] = [
+  { href: "/scenarios", label: "Scenarios" },
+  { href: "/admin/people", label: "People", permission: "admin:people" },
+  { href: "/admin/outbox", label: "Outbox", permission: "admin:people" },
+  { href: "/admin/audit", label: "Audit trail", permission: "admin:people" },
+];

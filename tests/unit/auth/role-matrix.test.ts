@@ -40,10 +40,10 @@ async function callRoute(endpoint: Endpoint, testCase: RouteCase, caller: Caller
   const params = Object.fromEntries(Object.entries((await testCase.params?.(fixture)) ?? {}).map(([k, v]) => [k, String(v)]));
   const body = testCase.body?.(fixture);
   app.signInAs(caller);
-  const module = (await import(path.join(ROOT, endpoint.file))) as Record<string, AnyHandler>;
+  const loaded = (await import(path.join(ROOT, endpoint.file))) as Record<string, AnyHandler>;
   const url = `http://leeway.test${fillPath(routePathOf(endpoint.file), params)}${testCase.query ?? ""}`;
   const request = new Request(url, { method: endpoint.exportName, body: body === undefined ? undefined : JSON.stringify(body) });
-  const response = await module[endpoint.exportName](request, { params: Promise.resolve(params) });
+  const response = await loaded[endpoint.exportName](request, { params: Promise.resolve(params) });
   return response.status;
 }
 
@@ -51,9 +51,9 @@ async function callAction(endpoint: Endpoint, testCase: ActionCase, caller: Call
   const fixture = await app.reset();
   const fields = await testCase.form(fixture);
   app.signInAs(caller);
-  const module = (await import(path.join(ROOT, endpoint.file))) as Record<string, AnyAction>;
+  const loaded = (await import(path.join(ROOT, endpoint.file))) as Record<string, AnyAction>;
   try {
-    const result = await module[endpoint.exportName](null, formData(fields));
+    const result = await loaded[endpoint.exportName](null, formData(fields));
     const status = typeof result === "object" && result && "status" in result ? result.status : undefined;
     if (typeof status !== "number") {
       throw new Error(`${endpoint.key} must return an ActionResult (lib/api/action-result.ts) so its status can be checked; it returned ${JSON.stringify(result)}`);

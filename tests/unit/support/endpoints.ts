@@ -39,14 +39,14 @@ export interface Endpoint {
 export async function discoverEndpoints(): Promise<Endpoint[]> {
   const endpoints: Endpoint[] = [];
   for (const file of sourceFiles("app").filter((file) => /(^|\/)route\.ts$/.test(file))) {
-    const module = (await import(path.join(ROOT, file))) as Record<string, unknown>;
+    const loaded = (await import(path.join(ROOT, file))) as Record<string, unknown>;
     for (const method of HTTP_METHODS) {
-      if (typeof module[method] === "function") endpoints.push({ key: `${method} ${routePathOf(file)}`, file, exportName: method, kind: "route" });
+      if (typeof loaded[method] === "function") endpoints.push({ key: `${method} ${routePathOf(file)}`, file, exportName: method, kind: "route" });
     }
   }
   for (const file of serverActionFiles()) {
-    const module = (await import(path.join(ROOT, file))) as Record<string, unknown>;
-    for (const [name, value] of Object.entries(module)) {
+    const loaded = (await import(path.join(ROOT, file))) as Record<string, unknown>;
+    for (const [name, value] of Object.entries(loaded)) {
       if (typeof value === "function") endpoints.push({ key: `${file}#${name}`, file, exportName: name, kind: "action" });
     }
   }

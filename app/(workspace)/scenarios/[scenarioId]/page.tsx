@@ -2,10 +2,12 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { z } from "zod";
 import { ScenarioMapPanel } from "@/components/scenarios/scenario-map-panel";
+import { VersionVisibility } from "@/components/publishing/version-visibility";
 import { StateBadge } from "@/components/scenarios/state-badge";
+import { listActiveCouncilMembers } from "@/db/queries/people";
 import { findScenario, listScenarioVersions } from "@/db/queries/scenarios";
 import { positiveIntParam } from "@/lib/api/params";
-import { visibleStates } from "@/lib/auth/permissions";
+import { can, visibleStates } from "@/lib/auth/permissions";
 import { requireUser } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Scenario" };
@@ -27,6 +29,8 @@ export default async function ScenarioPage(props: {
   const version = query.data.v ? versions.find((v) => v.number === query.data.v) : versions[0];
   // A version the role may not see is reported like a missing one: its existence is not the role's business.
   if (!version) notFound();
+  // Planners see how many council members a publication will e-mail before they publish.
+  const councilMembers = can(user.role, "scenario:publish") ? (await listActiveCouncilMembers()).length : 0;
 
   return (
     <div className="space-y-4">
@@ -39,6 +43,14 @@ export default async function ScenarioPage(props: {
         </span>
       </div>
       {scenario.description && <p className="max-w-3xl">{scenario.description}</p>}
+      {can(user.role, "scenario:publish") && (
+        <VersionVisibility
+          scenarioId={scenario.id}
+          versionNumber={version.number}
+          state={version.state}
+          councilMembers={councilMembers}
+        />
+      )}
       <ScenarioMapPanel scenarioId={scenario.id} versionNumber={version.number} />
     </div>
   );

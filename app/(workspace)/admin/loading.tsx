@@ -1,0 +1,3 @@
+export default function AdminLoading() {
+  return <p className="text-ink-muted">Loading…</p>;
+}
