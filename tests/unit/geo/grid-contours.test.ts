@@ -46,7 +46,7 @@ describe("contours as RFC 7946 GeoJSON", () => {
       // Skip cells within 0.5 s of a break: the contour passes between cell centres there.
       if (grid.warningBreaksS.some((b) => Math.abs(w - b) < 0.5)) continue;
       const point = turf.point([grid.lonDeg[i % grid.width], grid.latDeg[Math.floor(i / grid.width)]]);
-      const containing = [...contours.warning.features, ...contours.blindZone.features].filter((f) => turf.booleanPointInPolygon(point, f));
+      const containing = [...contours.warning.features, ...contours.blindZone.features].filter((f) => turf.booleanPointInPolygon(point, f.geometry));
       expect(containing).toHaveLength(1);
       const p = containing[0].properties;
       if (p.layer === "blind-zone") expect(w).toBeLessThanOrEqual(0);
