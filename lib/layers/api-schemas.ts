@@ -1,3 +1,4 @@
+import type { Geometry } from "geojson";
 import { z } from "zod";
 import { LAYER_KINDS } from "@/db/schema";
 import { positiveIntParam } from "@/lib/api/params";
@@ -74,7 +75,8 @@ export type StoredLayerResponse = z.infer<typeof storedLayerSchema>;
 
 const featureSchema = z.object({
   type: z.literal("Feature"),
-  geometry: z.object({ type: z.string(), coordinates: z.unknown() }),
+  // Drawn, not analysed: the map only needs a GeoJSON geometry object.
+  geometry: z.custom<Geometry>((g) => typeof g === "object" && g !== null && typeof (g as { type?: unknown }).type === "string", "must be a GeoJSON geometry"),
   properties: z.object({ label: z.string(), value: z.number().optional(), kind: z.string().optional(), operating: z.boolean().optional() }),
 });
 

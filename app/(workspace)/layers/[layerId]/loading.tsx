@@ -1,0 +1,3 @@
+export default function LayerLoading() {
+  return <p className="text-ink-muted">Loading the layer…</p>;
+}

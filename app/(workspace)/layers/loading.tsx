@@ -1,0 +1,3 @@
+export default function LayersLoading() {
+  return <p className="text-ink-muted">Loading layers…</p>;
+}
