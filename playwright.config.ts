@@ -42,6 +42,8 @@ export default defineConfig({
       DATABASE_URL: E2E_DATABASE_URL,
       NEXTAUTH_URL: `http://localhost:${E2E_PORT}`,
       LEEWAY_MODE: "demo",
+      // The local SMTP server of the tests, apart from a demo's on 2525.
+      SMTP_PORT: "2526",
     },
   },
 });
