@@ -56,6 +56,8 @@ export interface Engine {
 }
 
 const TABLE_MARGIN_KM = 50;
+// Flat layers hold to about 500 km; beyond the table, times come from the exact ray calculation.
+const TABLE_MAX_KM = 3000;
 
 function velocityModelOf(scenario: ResolvedScenario): VelocityModel {
   const vm = scenario.velocityModel;
@@ -153,7 +155,8 @@ export function prepareEngine(input: Scenario, options: EngineOptions = {}, extr
   const velocityModel = velocityModelOf(scenario);
   let reach = reachKm(scenario);
   for (const [lon, lat] of extraPoints) reach = Math.max(reach, lambertDistanceKm(src.lon, src.lat, lon, lat));
-  const tableOptions = { depthMinKm: src.depthKm, depthMaxKm: src.depthKm, maxDistanceKm: Math.hypot(reach + TABLE_MARGIN_KM, src.depthKm), distanceStepKm: 0.5 };
+  const maxDistanceKm = Math.min(TABLE_MAX_KM, Math.hypot(reach + TABLE_MARGIN_KM, src.depthKm));
+  const tableOptions = { depthMinKm: src.depthKm, depthMaxKm: src.depthKm, maxDistanceKm, distanceStepKm: 0.5 };
   const pTable = buildTravelTimeTable(velocityModel, "P", tableOptions);
   const sTable = buildTravelTimeTable(velocityModel, "S", tableOptions);
   const source = pointSource(src.depthKm);

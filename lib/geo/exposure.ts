@@ -1,0 +1,329 @@
+/**
+ * Exposure (BRIEF item 9): population cells, each assigned intensity, warning seconds and
+ * alerted or not, summed into tables by intensity class × warning band, by district and by
+ * channel. Fractional people are rounded by largest remainder on the finest table (district ×
+ * class × band × alerted), so every table — a sum of that one — adds up exactly to
+ * `totalPopulation` = round(Σ population). "Who can act" columns count alerted people only.
+ */
+import type { Scenario } from "@/lib/scenario/schema";
+import { havLongitude, lambertDistanceFromTermsKm, lambertLatitudeTerms, type LambertLatitudeTerms } from "./distance";
+import { prepareEngine, type Engine, type EngineOptions } from "./engine";
+import type { IntensityScaleId } from "./intensity/scales";
+import { createPlaceValues, evaluateAlert, evaluateShaking, pExceedTarget } from "./place";
+import { CAUTION, type Provenance } from "./provenance";
+import { roundLargestRemainder } from "./rounding";
+import { NO_ALERT_BAND, warningBandIndex, warningBands, type WarningBand } from "./warning";
+import { reducedLatitudeRad } from "./wgs84";
+
+const DEG = Math.PI / 180;
+
+/** Population cells as parallel arrays: centres in degrees, people ≥ 0, optional district index (−1: none). */
+export interface PopulationCells {
+  lon: Float64Array;
+  lat: Float64Array;
+  population: Float64Array;
+  district?: Int32Array;
+  districtNames?: string[];
+}
+
+/** A protective action and the seconds it takes once started. */
+export interface ProtectiveAction {
+  id: string;
+  seconds: number;
+}
+
+/** Options for `computeExposure`. */
+export interface ExposureOptions extends EngineOptions {
+  /** Actions to count people for: an action fits when warning ≥ reactionS + its seconds. */
+  actions?: readonly ProtectiveAction[];
+  /** Seconds before an action starts (a workspace setting; default 0). */
+  reactionS?: number;
+}
+
+/** One row of the intensity class × warning band table. */
+export interface ExposureTableRow {
+  intensityClass: string;
+  warningBand: string;
+  population: number;
+  /** Of `population`, the people who are alerted. */
+  alertedPopulation: number;
+}
+
+/** People in one district (`district` null: the "no district" row). */
+export interface DistrictExposure {
+  district: string | null;
+  population: number;
+  alertedPopulation: number;
+  /** Warning ≤ 0 on the primary channel, alerted or not. */
+  blindZonePopulation: number;
+  /** Alerted people with warning > 0: those who can act. */
+  alertedWithWarningPopulation: number;
+}
+
+/** People per warning band through one channel. */
+export interface ChannelExposure {
+  channel: string;
+  deliveryS: number;
+  primary: boolean;
+  blindZonePopulation: number;
+  alertedPopulation: number;
+  alertedWithWarningPopulation: number;
+  bands: { warningBand: string; population: number; alertedPopulation: number }[];
+}
+
+/** Expected people at the current alert setting, from the ground-motion sigma (METHODS.md §9). */
+export interface ExpectedOutcomes {
+  /** Alerted, but shaking stays below the target. */
+  needless: number;
+  /** Alerted with warning ≤ 0 and shaking at or above the target. */
+  late: number;
+  /** Not alerted, and shaking at or above the target. */
+  missed: number;
+  target: number;
+  note: string;
+}
+
+/** Result of `computeExposure`. */
+export interface ExposureResult {
+  totalPopulation: number;
+  blindZonePopulation: number;
+  alertedPopulation: number;
+  notAlertedPopulation: number;
+  /** Alerted people with warning > 0 on the primary channel. */
+  alertedWithWarningPopulation: number;
+  /** People no alert can reach (wavefield strategy far from stations). */
+  noAlertPopulation: number;
+  intensityScale: IntensityScaleId;
+  intensityClasses: readonly string[];
+  warningBands: WarningBand[];
+  table: ExposureTableRow[];
+  byDistrict: DistrictExposure[];
+  byChannel: ChannelExposure[];
+  /** Alerted people who can complete each action (warning ≥ reaction + action seconds). */
+  actions: { id: string; seconds: number; population: number }[];
+  expected: ExpectedOutcomes;
+  alertIssued: boolean;
+  notes: string[];
+  caution: string;
+  provenance: Provenance;
+}
+
+/** Float accumulators for one computation. */
+interface Tallies {
+  /** [district + 1][class][band][alerted] for the primary channel; band index bands.length = "no alert". */
+  joint: Float64Array;
+  /** [channel][band][alerted]. */
+  channels: Float64Array;
+  actions: Float64Array;
+  needless: number;
+  late: number;
+  missed: number;
+}
+
+/** Computes exposure with an engine already prepared for the scenario. */
+export function computeExposureWith(engine: Engine, cells: PopulationCells, options: ExposureOptions = {}): Omit<ExposureResult, "notes" | "caution" | "provenance"> {
+  const breaks = engine.scenario.warningBreaksS;
+  const bands = warningBands(breaks);
+  const bandSlots = bands.length + 1;
+  const classes = engine.scale.classes;
+  const districtNames = cells.districtNames ?? [];
+  const districtSlots = districtNames.length + 1;
+  const channels = engine.timeline.channels;
+  const offsets = channels.map((c) => channels[0].deliveryS - c.deliveryS);
+  const actions = options.actions ?? [];
+  const reactionS = options.reactionS ?? 0;
+  const t: Tallies = {
+    joint: new Float64Array(districtSlots * classes.length * bandSlots * 2),
+    channels: new Float64Array(channels.length * bandSlots * 2),
+    actions: new Float64Array(actions.length),
+    needless: 0,
+    late: 0,
+    missed: 0,
+  };
+  const { lon: lon0, lat: lat0 } = engine.scenario.source;
+  const originBeta = reducedLatitudeRad(lat0);
+  const sinB1 = Math.sin(originBeta);
+  const cosB1 = Math.cos(originBeta);
+  const needsFrame = engine.source.needsLocalFrame;
+  const evaluator = engine.strategy.forPoints();
+  const v = createPlaceValues();
+  // Population cells usually come row by row: reuse the latitude terms while the latitude repeats.
+  let lastLat = Number.NaN;
+  let terms: LambertLatitudeTerms = lambertLatitudeTerms(originBeta, 0);
+  let sinB2 = 0;
+  let cosB2 = 1;
+  let total = 0;
+  for (let i = 0; i < cells.population.length; i++) {
+    const people = cells.population[i];
+    if (!(people > 0)) continue;
+    total += people;
+    const lon = cells.lon[i];
+    const lat = cells.lat[i];
+    if (lat !== lastLat) {
+      terms = lambertLatitudeTerms(originBeta, lat);
+      const beta = reducedLatitudeRad(lat);
+      sinB2 = Math.sin(beta);
+      cosB2 = Math.cos(beta);
+      lastLat = lat;
+    }
+    const epicentralKm = lambertDistanceFromTermsKm(terms, havLongitude(lon - lon0));
+    let eastKm = 0;
+    let northKm = 0;
+    if (needsFrame && epicentralKm > 0) {
+      const dLon = (lon - lon0) * DEG;
+      const e = Math.sin(dLon) * cosB2;
+      const n = cosB1 * sinB2 - sinB1 * cosB2 * Math.cos(dLon);
+      const norm = Math.hypot(e, n);
+      eastKm = (epicentralKm * e) / norm;
+      northKm = (epicentralKm * n) / norm;
+    }
+    evaluateShaking(engine, epicentralKm, eastKm, northKm, engine.vs30.vs30At(lon, lat), v);
+    evaluateAlert(engine, evaluator, i, lon, lat, v);
+    const alerted = v.alert.alerted ? 1 : 0;
+    const district = cells.district ? cells.district[i] : -1;
+    const districtSlot = district >= 0 && district < districtNames.length ? district + 1 : 0;
+    const classIndex = engine.scale.classIndex(v.intensity);
+    for (let k = 0; k < channels.length; k++) {
+      const band = warningBandIndex(v.warningS + offsets[k], breaks);
+      const slot = band < 0 ? bands.length : band;
+      if (k === 0) t.joint[((districtSlot * classes.length + classIndex) * bandSlots + slot) * 2 + alerted] += people;
+      t.channels[(k * bandSlots + slot) * 2 + alerted] += people;
+    }
+    if (alerted) for (let a = 0; a < actions.length; a++) if (v.warningS >= reactionS + actions[a].seconds) t.actions[a] += people;
+    const p = pExceedTarget(engine, v);
+    if (alerted) {
+      t.needless += people * (1 - p);
+      if (v.warningS <= 0) t.late += people * p;
+    } else t.missed += people * p;
+  }
+  return summarize(engine, t, Math.round(total), { bands, classes, districtNames, actions });
+}
+
+function summarize(
+  engine: Engine,
+  t: Tallies,
+  totalPopulation: number,
+  labels: { bands: WarningBand[]; classes: readonly string[]; districtNames: string[]; actions: readonly ProtectiveAction[] },
+): Omit<ExposureResult, "notes" | "caution" | "provenance"> {
+  const { bands, classes, districtNames } = labels;
+  const bandSlots = bands.length + 1;
+  const allBands = [...bands, NO_ALERT_BAND];
+  const joint = roundLargestRemainder(t.joint, totalPopulation);
+  const at = (d: number, c: number, b: number, a: number) => joint[((d * classes.length + c) * bandSlots + b) * 2 + a];
+  const districtSlots = districtNames.length + 1;
+
+  const table: ExposureTableRow[] = [];
+  for (let c = 0; c < classes.length; c++) {
+    for (let b = 0; b < bandSlots; b++) {
+      let population = 0;
+      let alertedPopulation = 0;
+      for (let d = 0; d < districtSlots; d++) {
+        population += at(d, c, b, 0) + at(d, c, b, 1);
+        alertedPopulation += at(d, c, b, 1);
+      }
+      // The "no alert" band only appears when some cell has no alert at all.
+      if (b === bands.length && population === 0) continue;
+      table.push({ intensityClass: classes[c], warningBand: allBands[b].id, population, alertedPopulation });
+    }
+  }
+
+  const districtRow = (d: number): DistrictExposure => {
+    let population = 0;
+    let alertedPopulation = 0;
+    let blindZonePopulation = 0;
+    let alertedWithWarningPopulation = 0;
+    for (let c = 0; c < classes.length; c++) {
+      for (let b = 0; b < bandSlots; b++) {
+        const [no, yes] = [at(d, c, b, 0), at(d, c, b, 1)];
+        population += no + yes;
+        alertedPopulation += yes;
+        if (b === 0) blindZonePopulation += no + yes;
+        else if (b < bands.length) alertedWithWarningPopulation += yes;
+      }
+    }
+    return { district: d === 0 ? null : districtNames[d - 1], population, alertedPopulation, blindZonePopulation, alertedWithWarningPopulation };
+  };
+  const byDistrict = [...districtNames.map((_, k) => districtRow(k + 1)), districtRow(0)];
+  const totals = byDistrict.reduce(
+    (sum, r) => ({
+      alerted: sum.alerted + r.alertedPopulation,
+      blind: sum.blind + r.blindZonePopulation,
+      withWarning: sum.withWarning + r.alertedWithWarningPopulation,
+    }),
+    { alerted: 0, blind: 0, withWarning: 0 },
+  );
+  let noAlertPopulation = 0;
+  for (let d = 0; d < districtSlots; d++) for (let c = 0; c < classes.length; c++) noAlertPopulation += at(d, c, bands.length, 0) + at(d, c, bands.length, 1);
+
+  const channels = engine.timeline.channels;
+  const byChannel = channels.map((channel, k): ChannelExposure => {
+    const slice = t.channels.subarray(k * bandSlots * 2, (k + 1) * bandSlots * 2);
+    // The primary channel's figures are sums of the main table, so they agree with it exactly.
+    const rounded = k === 0 ? primaryChannelCounts(at, classes.length, bandSlots, districtSlots) : roundLargestRemainder(slice, totalPopulation);
+    const rows = allBands.map((band, b) => ({ warningBand: band.id, population: rounded[b * 2] + rounded[b * 2 + 1], alertedPopulation: rounded[b * 2 + 1] }));
+    const alertedPopulation = rows.reduce((s, r) => s + r.alertedPopulation, 0);
+    return {
+      channel: channel.id,
+      deliveryS: channel.deliveryS,
+      primary: k === 0,
+      blindZonePopulation: rows[0].population,
+      alertedPopulation,
+      alertedWithWarningPopulation: rows.slice(1, bands.length).reduce((s, r) => s + r.alertedPopulation, 0),
+      bands: rows.filter((r, b) => b < bands.length || r.population > 0),
+    };
+  });
+
+  return {
+    totalPopulation,
+    blindZonePopulation: totals.blind,
+    alertedPopulation: totals.alerted,
+    notAlertedPopulation: totalPopulation - totals.alerted,
+    alertedWithWarningPopulation: totals.withWarning,
+    noAlertPopulation,
+    intensityScale: engine.scale.id,
+    intensityClasses: classes,
+    warningBands: bands,
+    table,
+    byDistrict,
+    byChannel,
+    actions: labels.actions.map((a, k) => ({ id: a.id, seconds: a.seconds, population: Math.round(t.actions[k]) })),
+    expected: {
+      needless: t.needless,
+      late: t.late,
+      missed: t.missed,
+      target: engine.scenario.alert.target,
+      note: "expected counts from ground-motion scatter only (conversion scatter left out); residuals are correlated between places, so no ranges are given",
+    },
+    alertIssued: engine.strategy.issued,
+  };
+}
+
+/** [band][alerted] counts of the primary channel, summed from the rounded main table. */
+function primaryChannelCounts(at: (d: number, c: number, b: number, a: number) => number, classCount: number, bandSlots: number, districtSlots: number): Float64Array {
+  const out = new Float64Array(bandSlots * 2);
+  for (let d = 0; d < districtSlots; d++)
+    for (let c = 0; c < classCount; c++)
+      for (let b = 0; b < bandSlots; b++) {
+        out[b * 2] += at(d, c, b, 0);
+        out[b * 2 + 1] += at(d, c, b, 1);
+      }
+  return out;
+}
+
+/** Exposure of population cells to a parsed scenario. */
+export function computeExposure(scenario: Scenario, population: PopulationCells, options: ExposureOptions = {}): ExposureResult {
+  const engine = prepareEngine(scenario, options, samplePoints(population));
+  return { ...computeExposureWith(engine, population, options), notes: engine.notes, caution: CAUTION, provenance: engine.provenance };
+}
+
+/** The corners of the cells' bounding box, so travel-time tables reach every cell. */
+function samplePoints(cells: PopulationCells): [number, number][] {
+  let [w, s, e, n] = [Infinity, Infinity, -Infinity, -Infinity];
+  for (let i = 0; i < cells.lon.length; i++) {
+    w = Math.min(w, cells.lon[i]);
+    e = Math.max(e, cells.lon[i]);
+    s = Math.min(s, cells.lat[i]);
+    n = Math.max(n, cells.lat[i]);
+  }
+  return cells.lon.length ? [[w, s], [w, n], [e, s], [e, n]] : [];
+}
