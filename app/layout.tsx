@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import localFont from "next/font/local";
+import { headers } from "next/headers";
 import "./globals.css";
 
 const leewaySans = localFont({
@@ -17,7 +18,10 @@ export const metadata: Metadata = {
   description: "Earthquake early-warning planning workspace",
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Reading the request's nonce makes every page render per request, so Next can put the nonce of
+  // this response's Content-Security-Policy (set in proxy.ts) on its inline scripts.
+  await headers();
   return (
     <html lang="en" className={leewaySans.variable}>
       <body className="min-h-screen antialiased">{children}</body>
