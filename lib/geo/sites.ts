@@ -50,6 +50,9 @@ export interface SiteResult {
   /** Primary channel: sArrivalS − alertS (computed whether or not the site is alerted). */
   warningS: number | null;
   alerted: boolean;
+  /** Intensity on the scenario's scale (`intensityScale`) and its class. */
+  intensity: number;
+  intensityClass: string;
   /** Intensity the system predicts at alert time, on the scenario's scale. */
   predictedIntensity: number;
   pgvCms: number;
@@ -106,6 +109,8 @@ export function evaluateSites(engine: Engine, sites: readonly SiteInput[]): Site
       alertS: orNull(values.alertS),
       warningS: orNull(values.warningS),
       alerted: values.alert.alerted,
+      intensity: values.intensity,
+      intensityClass: engine.scale.classes[engine.scale.classIndex(values.intensity)],
       predictedIntensity: values.alert.predictedIntensity,
       pgvCms: 10 ** values.log10PgvCms,
       pgaCms2: 10 ** engine.motion.log10PgaCms2(values.modelDistanceKm, vs30Ms),
