@@ -8,6 +8,8 @@ const populationSummary = z.object({ totalPopulation: z.number(), cells: z.numbe
 const siteConditionSummary = z.object({ minVs30Ms: z.number(), maxVs30Ms: z.number(), medianVs30Ms: z.number().optional() });
 const districtsSummary = z.object({ districts: z.number() });
 const facilitiesSummary = z.object({ byKind: z.record(z.string(), z.number()), railKm: z.number().optional() });
+/** The demo seed's older facility summary. */
+const seededFacilitiesSummary = z.object({ schools: z.number(), hospitals: z.number(), railSegments: z.number() });
 const stationsSummary = z.object({ stations: z.number(), operating: z.number() });
 
 const FACILITY_WORDS: Record<string, [string, string]> = {
@@ -42,6 +44,8 @@ export function describeLayerSummary(kind: LayerKind, summary: unknown): string 
       return s.success ? plural(s.data.districts, "district") : "";
     }
     case "facilities": {
+      const seeded = seededFacilitiesSummary.safeParse(summary);
+      if (seeded.success) return `${plural(seeded.data.schools, "school")}, ${plural(seeded.data.hospitals, "hospital")}, ${plural(seeded.data.railSegments, "rail segment")}`;
       const s = facilitiesSummary.safeParse(summary);
       if (!s.success) return "";
       const parts = Object.entries(s.data.byKind)

@@ -123,3 +123,21 @@ describe("facilities GeoJSON", () => {
     expect(error.issues[3].message).toBe("has 1 positions; at least 2 are needed");
   });
 });
+
+describe("display features", () => {
+  it("merges a large grid into bins that keep every person and the grid's outline", async () => {
+    const { toDisplayFeatures } = await import("@/lib/layers/display-features");
+    const n = 120_000;
+    const lon = Float64Array.from({ length: n }, (_, i) => -126.4 + (i % 250) * 0.002);
+    const lat = Float64Array.from({ length: n }, (_, i) => -47.1 + Math.floor(i / 250) * 0.002);
+    const people = Float64Array.from({ length: n }, (_, i) => (i % 40) + 1);
+    const drawn = toDisplayFeatures({ kind: "population", lon, lat, people, fileDistricts: null }, { maxPoints: 4000 });
+    expect(drawn.features.length).toBeLessThanOrEqual(4000);
+    // Conservation: sum over i of (i mod 40) + 1 for 120,000 = 3,000 full cycles of 1..40 = 3,000 × 820.
+    expect(drawn.features.reduce((total, f) => total + (f.properties.value ?? 0), 0)).toBeCloseTo(3000 * 820, 6);
+    const xs = drawn.features.map((f) => (f.geometry as { coordinates: number[] }).coordinates[0]);
+    // Bin centres reach within one bin (≈ 0.5° / 40 columns) of both edges.
+    expect(Math.min(...xs)).toBeLessThan(-126.4 + 0.02);
+    expect(Math.max(...xs)).toBeGreaterThan(-126.4 + 249 * 0.002 - 0.02);
+  });
+});
