@@ -65,6 +65,8 @@ function main() {
     minzoom: MIN_ZOOM,
     maxzoom: MAX_ZOOM,
     bounds: bounds.map((v) => Math.round(v * 1e4) / 1e4),
+    // The island itself, for fitting the first view.
+    landBounds: region.bbox.map((v) => Math.round(v * 1e4) / 1e4),
     center: [(west + east) / 2, (south + north) / 2].map((v) => Math.round(v * 1e4) / 1e4),
     layers: BASEMAP_LAYER_NAMES,
     generator: "scripts/build-tiles.ts",

@@ -60,7 +60,7 @@ const districtLines: LineLayerSpecification = {
   id: MAP_LAYER_IDS.districtLines,
   type: "line",
   source: BASEMAP_SOURCE_ID,
-  "source-layer": "districts",
+  "source-layer": "district-boundaries",
   layout: { "line-join": "round" },
   paint: { "line-color": C.districtLine, "line-width": byZoom(5, 0.6, 11, 1.6), "line-dasharray": [4, 2.5] },
 };

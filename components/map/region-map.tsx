@@ -6,9 +6,11 @@ import "maplibre-gl/dist/maplibre-gl.css";
 import { useEffect, useRef, useState } from "react";
 import { CAUTION } from "@/lib/caution";
 import { sourcesToGeoJson, stationsToGeoJson, type MapSource, type MapStation } from "@/lib/map/overlays";
-import { BASEMAP_BOUNDS, buildMapStyle } from "@/lib/map/style";
+import { extendBounds, type Bounds } from "@/lib/map/bounds";
+import { BASEMAP_BOUNDS, buildMapStyle, LAND_BOUNDS } from "@/lib/map/style";
 import { OVERLAY_SOURCE_IDS, REGION_MAP_LAYERS } from "./layers";
 import { MapLegend } from "./map-legend";
+import { ZoomButtons } from "./zoom-buttons";
 
 export type { MapSource, MapStation } from "@/lib/map/overlays";
 
@@ -23,8 +25,8 @@ declare global {
 export interface RegionMapProps {
   stations: MapStation[];
   sources: MapSource[];
-  /** [west, south, east, north] to fit on first load, degrees; defaults to the whole basemap. */
-  bounds?: [number, number, number, number];
+  /** [west, south, east, north] to fit on first load and on "All", degrees; defaults to the island and the sources. */
+  bounds?: Bounds;
   /** The "how it was made" line shown under the map, after the basemap's own. */
   provenance?: string;
   /** An uploaded layer to draw over the basemap (polygons, lines, points), e.g. for checking an upload. */
@@ -44,6 +46,8 @@ function applyOverlays(map: MapLibreMap, overlay: { stations: MapStation[]; sour
 
 /** How far the view may wander past the basemap, degrees, so the island cannot be lost off-screen. */
 const PAN_MARGIN_DEG = 4;
+/** Room left around the fitted region, px. */
+const FIT_PADDING_PX = 32;
 
 /**
  * The map of the demo region: Leeway's own vector basemap with stations and sources on top, a scale
@@ -59,7 +63,7 @@ export function RegionMap({ stations, sources, bounds, provenance, overlay, chil
   const mapRef = useRef<MapLibreMap | null>(null);
   // The latest overlay data: the map is created asynchronously (after the import) and reads it then.
   const overlayRef = useRef({ stations, sources, layer: overlay });
-  const initialBounds = useRef(bounds ?? BASEMAP_BOUNDS);
+  const fitBounds = useRef<Bounds>(bounds ?? extendBounds(LAND_BOUNDS, sources));
   const [idle, setIdle] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
 
@@ -83,19 +87,22 @@ export function RegionMap({ stations, sources, bounds, provenance, overlay, chil
             [OVERLAY_SOURCE_IDS.layer]: { type: "geojson", data: overlayRef.current.layer ?? NO_FEATURES },
           },
         }),
-        bounds: initialBounds.current,
-        fitBoundsOptions: { padding: 24 },
+        bounds: fitBounds.current,
+        fitBoundsOptions: { padding: FIT_PADDING_PX },
         maxBounds: [w - PAN_MARGIN_DEG, s - PAN_MARGIN_DEG, e + PAN_MARGIN_DEG, n + PAN_MARGIN_DEG],
         minZoom: 4,
         maxZoom: 14,
         // Tests and the map-sheet export read the canvas back.
         canvasContextAttributes: { preserveDrawingBuffer: true },
-        attributionControl: { compact: true },
+        // North stays up (a map sheet's north arrow can then be fixed); the basemap's credit is in the caption.
+        dragRotate: false,
+        touchPitch: false,
+        attributionControl: false,
       });
+      map.touchZoomRotate.disableRotation();
       created = map;
       mapRef.current = map;
       window.__leewayMap = map;
-      map.addControl(new maplibregl.NavigationControl({ visualizePitch: false }), "top-right");
       map.addControl(new maplibregl.ScaleControl({ maxWidth: 140, unit: "metric" }), "bottom-left");
       // Props that changed while the style was loading have no source to go to yet: apply them now.
       map.once("load", () => applyOverlays(map, overlayRef.current));
@@ -118,10 +125,11 @@ export function RegionMap({ stations, sources, bounds, provenance, overlay, chil
 
   return (
     <figure className="space-y-2">
-      <div className="relative h-[34rem] overflow-hidden rounded-card border border-line bg-tide-soft">
+      <div className="relative h-[min(44rem,72vh)] overflow-hidden rounded-card border border-line bg-tide-soft">
         <div
           ref={containerRef}
-          className="absolute inset-0"
+          // Sized by its parent: MapLibre gives the container `position: relative` of its own.
+          className="h-full w-full"
           data-testid="region-map"
           data-map-idle={idle ? "true" : "false"}
           role="region"
@@ -133,7 +141,14 @@ export function RegionMap({ stations, sources, bounds, provenance, overlay, chil
           </p>
         )}
         {children && <div className="pointer-events-none absolute left-3 top-3 [&>*]:pointer-events-auto">{children}</div>}
-        <div className="absolute bottom-9 right-3">
+        <div className="absolute right-3 top-3">
+          <ZoomButtons
+            onZoomIn={() => mapRef.current?.zoomIn()}
+            onZoomOut={() => mapRef.current?.zoomOut()}
+            onFit={() => mapRef.current?.fitBounds(fitBounds.current, { padding: FIT_PADDING_PX })}
+          />
+        </div>
+        <div className="absolute bottom-3 right-3">
           <MapLegend />
         </div>
       </div>

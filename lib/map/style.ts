@@ -8,6 +8,9 @@ export const BASEMAP_SOURCE_ID = "basemap";
 /** [west, south, east, north] the basemap tiles cover, degrees (from public/tiles/metadata.json). */
 export const BASEMAP_BOUNDS = tileMetadata.bounds as [number, number, number, number];
 
+/** [west, south, east, north] of the island's land, degrees. */
+export const LAND_BOUNDS = tileMetadata.landBounds as [number, number, number, number];
+
 /** What a map style is made of besides the basemap source. */
 export interface MapStyleParts {
   /** The app's own origin (e.g. `http://localhost:3000`); every URL in the style starts with it. */

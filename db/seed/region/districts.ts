@@ -1,7 +1,7 @@
 import { featureCollection, intersect, point, polygon, voronoi } from "@turf/turf";
-import type { MultiPolygon, Polygon, Position } from "geojson";
+import type { LineString, MultiPolygon, Polygon, Position } from "geojson";
 import type { Coastline } from "./coastline";
-import { toLonLat, type KmPoint } from "./frame";
+import { toKm, toLonLat, type KmPoint } from "./frame";
 import { DISTRICT_NAMES } from "./names";
 import { uniform, type Random } from "./prng";
 
@@ -68,4 +68,34 @@ export function districtIndexAt(districts: readonly District[], p: KmPoint): num
     }
   }
   return best;
+}
+
+/** A ring segment whose midpoint lies this close to the shore is coastline, not a boundary between districts, km. */
+const ON_SHORE_KM = 0.05;
+
+/**
+ * The lines between districts, each drawn once: the districts' ring segments minus those along the
+ * coast, with the segment two neighbours share kept a single time. (Outlining each polygon would draw
+ * every shared edge twice, and two dash patterns out of step read as a solid line.)
+ */
+export function districtBoundaries(districts: readonly District[], coast: Coastline): LineString[] {
+  const seen = new Set<string>();
+  const lines: LineString[] = [];
+  const key = (p: Position) => `${p[0].toFixed(7)},${p[1].toFixed(7)}`;
+  for (const d of districts) {
+    const polygons = d.geometry.type === "Polygon" ? [d.geometry.coordinates] : d.geometry.coordinates;
+    for (const ring of polygons.flatMap((rings) => rings)) {
+      for (let i = 1; i < ring.length; i++) {
+        const [a, b] = [ring[i - 1], ring[i]];
+        const edgeKey = [key(a), key(b)].sort().join("|");
+        if (seen.has(edgeKey)) continue;
+        seen.add(edgeKey);
+        const [ax, ay] = toKm(a[0], a[1]);
+        const [bx, by] = toKm(b[0], b[1]);
+        if (coast.distanceToShoreKm([(ax + bx) / 2, (ay + by) / 2]) < ON_SHORE_KM) continue;
+        lines.push({ type: "LineString", coordinates: [a, b] });
+      }
+    }
+  }
+  return lines;
 }

@@ -1,6 +1,6 @@
-import type { Polygon } from "geojson";
+import type { LineString, Polygon } from "geojson";
 import { Coastline } from "./coastline";
-import { buildDistricts, districtIndexAt, type District } from "./districts";
+import { buildDistricts, districtBoundaries, districtIndexAt, type District } from "./districts";
 import { placeFacilities, type RegionFacility } from "./facilities";
 import { planeDistanceKm, toLonLat, type KmPoint } from "./frame";
 import { buildLandGrid } from "./land-grid";
@@ -55,6 +55,8 @@ export interface Region {
   /** [west, south, east, north] of the land, degrees. */
   bbox: [number, number, number, number];
   districts: District[];
+  /** The lines between neighbouring districts, each once (no coastline), lon/lat degrees. */
+  districtBoundaries: LineString[];
   towns: Town[];
   /** People per 1 km land cell, with each cell's district index. */
   population: RegionGrid & { district: Int32Array };
@@ -112,6 +114,7 @@ export function buildRegion(): Region {
     land: { type: "Polygon", coordinates: [ring] },
     bbox: [Math.min(...lons), Math.min(...lats), Math.max(...lons), Math.max(...lats)],
     districts,
+    districtBoundaries: districtBoundaries(districts, coast),
     towns,
     population: { cellKm: grid.cellKm, dLonDeg: grid.dLonDeg, dLatDeg: grid.dLatDeg, lon: grid.lon, lat: grid.lat, value: people, district: cellDistricts },
     siteCondition: { cellKm: soilGrid.cellKm, dLonDeg: soilGrid.dLonDeg, dLatDeg: soilGrid.dLatDeg, lon: soilGrid.lon, lat: soilGrid.lat, value: vs30Ms },

@@ -138,6 +138,26 @@ describe("districts", () => {
   });
 });
 
+describe("district boundaries", () => {
+  it("run between two different districts, once each, and never along the coast", () => {
+    expect(region.districtBoundaries.length).toBeGreaterThan(region.districts.length);
+    const districtOf = (lon: number, lat: number) => region.districts.findIndex((d) => booleanPointInPolygon(point([lon, lat]), d.geometry));
+    for (const line of region.districtBoundaries) {
+      const [[lon1, lat1], [lon2, lat2]] = line.coordinates;
+      const [midLon, midLat] = [(lon1 + lon2) / 2, (lat1 + lat2) / 2];
+      // Step 100 m to either side, perpendicular to the segment (degrees scaled by the local km per degree).
+      const [dxKm, dyKm] = [(lon2 - lon1) * 76, (lat2 - lat1) * 111];
+      const lengthKm = Math.hypot(dxKm, dyKm);
+      const [nLon, nLat] = [(-dyKm / lengthKm) * (0.1 / 76), (dxKm / lengthKm) * (0.1 / 111)];
+      const left = districtOf(midLon + nLon, midLat + nLat);
+      const right = districtOf(midLon - nLon, midLat - nLat);
+      expect(left, JSON.stringify(line.coordinates)).toBeGreaterThanOrEqual(0);
+      expect(right, JSON.stringify(line.coordinates)).toBeGreaterThanOrEqual(0);
+      expect(left).not.toBe(right);
+    }
+  });
+});
+
 describe("stations", () => {
   it("has a few dozen stations with unique codes, all on land", () => {
     expect(region.stations.length).toBeGreaterThanOrEqual(30);
