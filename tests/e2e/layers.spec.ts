@@ -67,6 +67,12 @@ test("a planner uploads a population CSV, sees progress and the preview, saves i
   const list = await (await page.request.get("/api/layers")).json();
   const saved = list.layers.find((l: { name: string }) => l.name === "Harbour cells (browser test)");
   expect(saved.latest.rowCount).toBe(rows);
+
+  // Leave the shared e2e database as the seed made it, for the tests that run after this one.
+  await page.getByRole("button", { name: "Delete layer" }).click();
+  await page.getByRole("button", { name: "Yes, delete" }).click();
+  await expect(page).toHaveURL(/\/layers$/);
+  await expect(page.getByTestId("layer-list")).not.toContainText("Harbour cells (browser test)");
 });
 
 test("a refused file shows its bad rows by number and saves nothing", async ({ page }) => {
