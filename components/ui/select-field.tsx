@@ -10,8 +10,12 @@ export function SelectField({
   const id = useId();
   const errorId = `${id}-error`;
   return (
-    <label htmlFor={id} className="block space-y-1">
-      <span className="text-sm font-semibold text-ink">{label}</span>
+    // The label sits beside the control, not around it, so the control's own text (the chosen option)
+    // does not become part of its accessible name.
+    <div className="space-y-1">
+      <label htmlFor={id} className="block text-sm font-semibold text-ink">
+        {label}
+      </label>
       <select
         id={id}
         aria-invalid={error ? true : undefined}
@@ -30,6 +34,6 @@ export function SelectField({
           {error}
         </span>
       )}
-    </label>
+    </div>
   );
 }

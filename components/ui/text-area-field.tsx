@@ -5,8 +5,12 @@ export function TextAreaField({ label, error, ...props }: TextareaHTMLAttributes
   const id = useId();
   const errorId = `${id}-error`;
   return (
-    <label htmlFor={id} className="block space-y-1">
-      <span className="text-sm font-semibold text-ink">{label}</span>
+    // The label sits beside the control, not around it, so the control's own text (the chosen option)
+    // does not become part of its accessible name.
+    <div className="space-y-1">
+      <label htmlFor={id} className="block text-sm font-semibold text-ink">
+        {label}
+      </label>
       <textarea
         id={id}
         aria-invalid={error ? true : undefined}
@@ -20,6 +24,6 @@ export function TextAreaField({ label, error, ...props }: TextareaHTMLAttributes
           {error}
         </span>
       )}
-    </label>
+    </div>
   );
 }
