@@ -92,6 +92,7 @@ interface PaddedField {
   /** Smallest value of the field (NaN cells excepted). */
   min: number;
   max: number;
+  hasNaN: boolean;
 }
 
 /** Copies a field into a padded array, optionally negated (so "≤ t" becomes "≥ −t"). */
@@ -101,6 +102,7 @@ function padField(values: ArrayLike<number>, width: number, height: number, nega
   const sign = negate ? -1 : 1;
   let min = Infinity;
   let max = -Infinity;
+  let hasNaN = false;
   for (let row = 0; row < height; row++) {
     const from = row * width;
     const to = (row + 1) * paddedWidth + 1;
@@ -109,21 +111,24 @@ function padField(values: ArrayLike<number>, width: number, height: number, nega
       padded[to + c] = v;
       if (v < min) min = v;
       if (v > max) max = v;
+      if (v !== v) hasNaN = true;
     }
   }
-  return { values: padded, width: paddedWidth, height: height + 2, min, max };
+  return { values: padded, width: paddedWidth, height: height + 2, min, max, hasNaN };
 }
 
 const PADDING_BELOW = 1e-3;
 
+/** The whole grid: a ring through the padding's centres, outside every traced ring. */
+function wholeGrid(field: PaddedField): RawRings {
+  const [x0, y0, x1, y1] = [0.5, 0.5, field.width - 0.5, field.height - 0.5];
+  return { rings: [[[x0, y0], [x1, y0], [x1, y1], [x0, y1], [x0, y0]]] };
+}
+
 /** Rings of the region ≥ `threshold`, in padded grid units. */
 function levelRings(field: PaddedField, threshold: number): RawRings {
   const { values, width, height } = field;
-  if (threshold <= field.min) {
-    // The whole grid: a ring through the padding's centres, outside every traced ring.
-    const [x0, y0, x1, y1] = [0.5, 0.5, width - 0.5, height - 0.5];
-    return { rings: [[[x0, y0], [x1, y0], [x1, y1], [x0, y1], [x0, y0]]] };
-  }
+  if (threshold <= field.min && !field.hasNaN) return wholeGrid(field);
   // Just below the level: edge crossings then fall near the padding's centres, clamped to the edge.
   const below = threshold - PADDING_BELOW;
   for (let c = 0; c < width; c++) {
@@ -138,17 +143,35 @@ function levelRings(field: PaddedField, threshold: number): RawRings {
   return { rings: multi.coordinates.flat() as Ring[] };
 }
 
-/** Maps padded grid units to lon/lat, clamping points in the padding onto the grid's edge. */
+const LEFT = 1;
+const RIGHT = 2;
+const TOP = 4;
+const BOTTOM = 8;
+
+/**
+ * Maps padded grid units to lon/lat, clamping points in the padding onto the grid's edge. Where a
+ * ring cuts across a padding corner (from one edge to the next), the grid's corner is put back.
+ */
 function toLonLat(ring: Ring, grid: EngineGrid, scale: number): Ring {
   const { width, height, cellLonDeg, cellLatDeg } = grid;
   const [west, , , north] = grid.bbox;
   const out: Ring = [];
-  for (const [px, py] of ring) {
-    const x = Math.min(width, Math.max(0, px - 1));
-    const y = Math.min(height, Math.max(0, py - 1));
+  const push = (x: number, y: number) => {
     const p: Position = [Math.round((west + x * cellLonDeg) * scale) / scale, Math.round((north - y * cellLatDeg) * scale) / scale];
     const last = out[out.length - 1];
     if (!last || last[0] !== p[0] || last[1] !== p[1]) out.push(p);
+  };
+  let lastEdges = 0;
+  for (const [px, py] of ring) {
+    const gx = px - 1;
+    const gy = py - 1;
+    const edges = (gx < 0 ? LEFT : 0) | (gx > width ? RIGHT : 0) | (gy < 0 ? TOP : 0) | (gy > height ? BOTTOM : 0);
+    if (edges && lastEdges && !(edges & lastEdges)) {
+      const corner = edges | lastEdges;
+      push(corner & LEFT ? 0 : width, corner & TOP ? 0 : height);
+    }
+    push(Math.min(width, Math.max(0, gx)), Math.min(height, Math.max(0, gy)));
+    lastEdges = edges;
   }
   return out;
 }
@@ -214,7 +237,9 @@ function nestRings(all: RawRings, grid: EngineGrid, scale: number): Ring[][] {
       if (parent !== undefined) polygonOf.get(parent)?.push(orient(toLonLat(ring, grid, scale), false));
     }
   });
-  return polygons;
+  // An outer ring and a hole both clamped onto the grid's edge enclose nothing: drop such slivers.
+  const minAreaDeg2 = 0.01 * grid.cellLonDeg * grid.cellLatDeg;
+  return polygons.filter(([outer, ...holes]) => signedArea(outer) + holes.reduce((sum, h) => sum + signedArea(h), 0) > minAreaDeg2);
 }
 
 function orient(ring: Ring, counterClockwise: boolean): Ring {
@@ -225,19 +250,29 @@ function feature<P>(properties: P, coordinates: Ring[][]): ContourFeature<P> {
   return { type: "Feature", properties, geometry: { type: "MultiPolygon", coordinates } };
 }
 
-/**
- * Bands between successive thresholds: band i is ≥ thresholds[i] less ≥ thresholds[i + 1]
- * (the last band is open above). Levels above the data are skipped.
- */
-function bands(values: ArrayLike<number>, grid: EngineGrid, thresholds: readonly number[], scale: number): Ring[][][] {
+/** Polygons of each band and of the region below the first threshold. */
+interface Banded {
+  /** Band i: ≥ thresholds[i] and < thresholds[i + 1] (the last band open above). */
+  bands: Ring[][][];
+  /** Below thresholds[0]; without NaN cells that is the complement of the first level, so no extra pass. */
+  below: Ring[][];
+}
+
+/** Bands between successive thresholds; levels above the data are skipped. */
+function bands(values: ArrayLike<number>, grid: EngineGrid, thresholds: readonly number[], scale: number): Banded {
   const field = padField(values, grid.width, grid.height);
   const levels = thresholds.map((t): RawRings => (t > field.max ? { rings: [] } : levelRings(field, t)));
-  return thresholds.map((_, i) => {
+  const banded = thresholds.map((_, i) => {
     // Empty when nothing reaches this level, or when the next level covers the whole grid.
-    if (levels[i].rings.length === 0 || (i + 1 < thresholds.length && thresholds[i + 1] <= field.min)) return [];
+    if (levels[i].rings.length === 0 || (i + 1 < thresholds.length && thresholds[i + 1] <= field.min && !field.hasNaN)) return [];
     const upper = i + 1 < levels.length ? levels[i + 1].rings : [];
     return nestRings({ rings: [...levels[i].rings, ...upper] }, grid, scale);
   });
+  let below: Ring[][];
+  if (field.hasNaN) below = region(values, grid, -thresholds[0], scale, true);
+  else if (thresholds[0] <= field.min) below = [];
+  else below = nestRings({ rings: [...wholeGrid(field).rings, ...levels[0].rings] }, grid, scale);
+  return { bands: banded, below };
 }
 
 /** The region ≥ `threshold` (≤ −threshold when `negate`) as polygons. */
@@ -254,16 +289,19 @@ export function traceContours(grid: EngineGrid, options: ContourOptions = {}): C
   const channel = grid.channels.find((c) => c.id === (options.channel ?? grid.channels[0].id));
   if (!channel) throw new Error(`unknown channel "${options.channel}"`);
   const warning = channel.offsetS === 0 ? grid.warningS : grid.warningS.map((w) => w + channel.offsetS);
-  const warningFeatures = bands(warning, grid, breaks, scale)
+  const warningBanded = bands(warning, grid, breaks, scale);
+  const warningFeatures = warningBanded.bands
     .map((coordinates, i) => ({ coordinates, band: warningBands(breaks)[i + 1] }))
     .filter((b) => b.coordinates.length > 0)
     .map(({ coordinates, band }) => feature<WarningBandProperties>({ layer: "warning", band: band.id, label: band.label, lowerS: band.lowerS, upperS: band.upperS }, coordinates));
 
-  const blind = region(warning, grid, -(BLIND_BAND.upperS ?? 0), scale, true);
+  // Bands start at 0 s, so the region below the first break is the blind zone (warning ≤ 0).
+  const blind = breaks[0] === BLIND_BAND.upperS ? warningBanded.below : region(warning, grid, -(BLIND_BAND.upperS ?? 0), scale, true);
 
   const bounds = grid.intensityClassLowerBounds;
   const intensityFeatures: ContourFeature<IntensityBandProperties>[] = [];
-  const lowest = region(grid.intensity, grid, -bounds[0], scale, true);
+  const intensityBanded = bands(grid.intensity, grid, bounds, scale);
+  const lowest = intensityBanded.below;
   const classBand = (classIndex: number, coordinates: Ring[][]) =>
     feature<IntensityBandProperties>(
       {
@@ -277,7 +315,7 @@ export function traceContours(grid: EngineGrid, options: ContourOptions = {}): C
       coordinates,
     );
   if (lowest.length) intensityFeatures.push(classBand(0, lowest));
-  bands(grid.intensity, grid, bounds, scale).forEach((coordinates, i) => {
+  intensityBanded.bands.forEach((coordinates, i) => {
     if (coordinates.length) intensityFeatures.push(classBand(i + 1, coordinates));
   });
 
