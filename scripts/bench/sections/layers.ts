@@ -3,7 +3,8 @@
  *  - a 200,000-row population CSV decoded, checked and stored (districts placed by point-in-polygon), limit 10 s;
  *  - a million population cells read back into typed arrays, cold (a fresh Node process, as the first
  *    request after a server start) and warm (the same process again), limit "well under a second".
- * Runs on its own temporary database file. `npx tsx scripts/bench/layers.ts` prints the figures.
+ * Runs on its own temporary database file. The file is also the fresh process of the cold read
+ * (`node --import tsx scripts/bench/sections/layers.ts cold-read <db> <layerVersionId>`).
  */
 import { spawnSync } from "node:child_process";
 import { randomBytes } from "node:crypto";
@@ -16,16 +17,9 @@ import { readGridLayer, storeLayerVersion } from "@/db/queries/layers";
 import { decodeLayerFile } from "@/lib/layers/decode";
 import type { ParsedLayer } from "@/lib/layers/parsed-layer";
 import { readLayerFile } from "@/lib/layers/read-layer-file";
+import type { BenchFigure, BenchSection } from "../section";
 
-/** One measured figure. */
-export interface LayerBenchResult {
-  name: string;
-  ms: number;
-  /** The issue's limit, when it sets one. */
-  limitMs?: number;
-  detail: string;
-}
-
+const THIS_FILE = "scripts/bench/sections/layers.ts";
 const CSV_ROWS = 200_000;
 const READ_CELLS = 1_000_000;
 const WARM_RUNS = 5;
@@ -77,10 +71,10 @@ async function coldRead(dbFile: string, layerVersionId: number) {
 }
 
 /** Runs the layer benchmarks on a temporary database and returns the figures. */
-export async function runLayerBenchmarks(): Promise<LayerBenchResult[]> {
+async function runLayerBenchmarks(): Promise<BenchFigure[]> {
   const dbFile = path.join(tmpdir(), `leeway-bench-layers-${randomBytes(6).toString("hex")}.db`);
   const { db, client } = connect(`file:${dbFile}`);
-  const results: LayerBenchResult[] = [];
+  const results: BenchFigure[] = [];
   try {
     await migrate(db, { migrationsFolder: "db/migrations" });
     const districts = await readLayerFile("districts", "geojson", decodeLayerFile("districts", districtsGeojson()));
@@ -90,10 +84,10 @@ export async function runLayerBenchmarks(): Promise<LayerBenchResult[]> {
     const checked = await timed(async () => readLayerFile("population", "csv", decodeLayerFile("population", csv)));
     const stored = await timed(() => storeLayerVersion({ db, layer: checked.value, target: { name: "Bench CSV" }, sourceFile: "bench.csv", actorId: null }));
     results.push({
-      name: `population CSV, ${CSV_ROWS.toLocaleString("en")} rows: checked and stored`,
+      label: `population CSV, ${CSV_ROWS.toLocaleString("en")} rows: checked and stored`,
       ms: checked.ms + stored.ms,
-      limitMs: 10_000,
-      detail: `${(csv.byteLength / 1e6).toFixed(1)} MB; check ${checked.ms.toFixed(0)} ms, store with district placement ${stored.ms.toFixed(0)} ms`,
+      targetMs: 10_000,
+      note: `${(csv.byteLength / 1e6).toFixed(1)} MB; check ${checked.ms.toFixed(0)} ms, store with district placement ${stored.ms.toFixed(0)} ms`,
     });
 
     const { lon, lat } = gridCoordinates(READ_CELLS);
@@ -108,20 +102,20 @@ export async function runLayerBenchmarks(): Promise<LayerBenchResult[]> {
     };
     const big = await storeLayerVersion({ db, layer: million, target: { name: "Bench million" }, sourceFile: "generated", actorId: null });
 
-    const child = spawnSync(process.execPath, ["--import", "tsx", "scripts/bench/layers.ts", "cold-read", dbFile, String(big.layerVersionId)], { encoding: "utf8" });
+    const child = spawnSync(process.execPath, ["--import", "tsx", THIS_FILE, "cold-read", dbFile, String(big.layerVersionId)], { encoding: "utf8" });
     if (child.status !== 0) throw new Error(`cold read failed: ${child.stderr}`);
     const cold = JSON.parse(child.stdout) as { ms: number; cells: number };
-    results.push({ name: "1,000,000 population cells read into typed arrays, cold", ms: cold.ms, limitMs: 1000, detail: "fresh process: open the database, query, unpack" });
+    results.push({ label: "1,000,000 population cells into typed arrays, cold", ms: cold.ms, targetMs: 1000, note: "fresh process: open the database, query, unpack" });
 
     await readGridLayer({ db, layerVersionId: big.layerVersionId });
     const warm: number[] = [];
     for (let run = 0; run < WARM_RUNS; run++) warm.push((await timed(() => readGridLayer({ db, layerVersionId: big.layerVersionId }))).ms);
     warm.sort((a, b) => a - b);
     results.push({
-      name: "1,000,000 population cells read into typed arrays, warm",
+      label: "1,000,000 population cells into typed arrays, warm",
       ms: warm[Math.floor(WARM_RUNS / 2)],
-      limitMs: 1000,
-      detail: `median of ${WARM_RUNS} (fastest ${warm[0].toFixed(0)} ms, slowest ${warm[WARM_RUNS - 1].toFixed(0)} ms)`,
+      targetMs: 1000,
+      note: `median of ${WARM_RUNS} (fastest ${warm[0].toFixed(0)} ms, slowest ${warm[WARM_RUNS - 1].toFixed(0)} ms)`,
     });
     return results;
   } finally {
@@ -130,19 +124,16 @@ export async function runLayerBenchmarks(): Promise<LayerBenchResult[]> {
   }
 }
 
-// Run directly: print the figures; with `cold-read <db> <id>`, be the fresh process of the cold read.
-if (process.argv[1]?.endsWith(path.join("scripts", "bench", "layers.ts"))) {
-  const [mode, dbFile, id] = process.argv.slice(2);
-  const main =
-    mode === "cold-read"
-      ? () => coldRead(dbFile, Number(id))
-      : async () => {
-          for (const r of await runLayerBenchmarks()) {
-            const verdict = r.limitMs === undefined ? "" : r.ms <= r.limitMs ? `  (limit ${r.limitMs} ms: ok)` : `  (limit ${r.limitMs} ms: OVER)`;
-            console.log(`${r.name}: ${r.ms.toFixed(0)} ms${verdict} — ${r.detail}`);
-          }
-        };
-  main().catch((error: unknown) => {
+/** Layer uploads and grid reads (issue 6). */
+export const layersSection: BenchSection = {
+  id: "layers",
+  title: "Layers: population CSV upload, grid read-back",
+  run: runLayerBenchmarks,
+};
+
+// Run as the cold read's fresh process.
+if (process.argv[1]?.endsWith(THIS_FILE) && process.argv[2] === "cold-read") {
+  coldRead(process.argv[3], Number(process.argv[4])).catch((error: unknown) => {
     console.error(error);
     process.exit(1);
   });
