@@ -2,6 +2,7 @@ import { cliSection } from "./sections/cli";
 import { contoursSection } from "./sections/contours";
 import { engineGridSection } from "./sections/engine-grid";
 import { exposureSection } from "./sections/exposure";
+import { layersSection } from "./sections/layers";
 import type { BenchSection } from "./section";
 
 /** Every benchmark section, in the order `npm run bench` runs them: add one line per new section file. */
@@ -10,4 +11,5 @@ export const SECTIONS: BenchSection[] = [
   contoursSection,
   exposureSection,
   cliSection,
+  layersSection,
 ];
