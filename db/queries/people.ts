@@ -68,7 +68,7 @@ async function assertAnotherActiveAdmin(tx: Executor, userId: number): Promise<v
  * Creates an account without a password and an invitation link for it, in one transaction.
  * The caller e-mails the link; the token is returned only here.
  */
-export async function invitePerson({ actorId, email, name, role }: { actorId: number; email: string; name: string; role: Role }) {
+export async function invitePerson({ actorId, email, name, role }: { actorId: number | null; email: string; name: string; role: Role }) {
   const normalized = email.trim().toLowerCase();
   return db.transaction(async (tx) => {
     const [existing] = await tx.select({ id: users.id }).from(users).where(eq(users.email, normalized));
