@@ -49,6 +49,19 @@ async function newPasswordForm(kind: "invite" | "reset") {
   return { token, password: "a-long-new-password", confirm: "a-long-new-password" };
 }
 
+/** A complete scenario file (the fixture's source and stations plus site conditions and an area), for the writing routes. */
+const MATRIX_SCENARIO_FILE = {
+  version: 1,
+  name: "Matrix scenario",
+  source: { lon: 150.2, lat: -30.1, depthKm: 20, mw: 7.1, faultType: "crustal" },
+  stations: [
+    { id: "S1", lon: 150.0, lat: -30.0 },
+    { id: "S2", lon: 150.4, lat: -30.2 },
+  ],
+  vs30: 400,
+  area: { bbox: [149.5, -30.6, 150.9, -29.6], cellKm: 5 },
+};
+
 const versionParams = (number: keyof Fixture["versions"]) => (fixture: Fixture) => ({ scenarioId: fixture.scenarioId, number: fixture.versions[number] });
 
 export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
@@ -76,6 +89,18 @@ export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
       { name: "draft", params: versionParams("draft"), expect: fromBrief("see draft scenarios", 200, { trainer: 403 }) },
       { name: "shared", params: versionParams("shared"), expect: fromBrief("see draft scenarios", 200, { trainer: 200 }) },
       { name: "published", params: versionParams("published"), expect: fromBrief("see published scenarios, their exposure and council view", 200) },
+    ],
+  },
+  "POST /api/scenarios": {
+    cases: [{ body: () => ({ name: "Matrix scenario", scenario: MATRIX_SCENARIO_FILE }), expect: fromBrief("edit scenarios, stations, layers; upload", 201) }],
+  },
+  "POST /api/scenarios/[scenarioId]/versions": {
+    cases: [
+      {
+        params: (f) => ({ scenarioId: f.scenarioId }),
+        body: (f) => ({ scenario: MATRIX_SCENARIO_FILE, basedOn: f.versions.published, note: "Matrix" }),
+        expect: fromBrief("edit scenarios, stations, layers; upload", 201),
+      },
     ],
   },
   "POST /api/scenarios/[scenarioId]/versions/[number]/publish": {
