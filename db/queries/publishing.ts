@@ -5,7 +5,7 @@ import { db } from "@/db/client";
 import { layers, layerVersions, scenarios, scenarioVersions, type ScenarioRow, type ScenarioVersionRow } from "@/db/schema";
 import { recordAudit, type Executor } from "@/lib/audit/record";
 import { LeewayError } from "@/lib/errors";
-import { computeHeadline, type Headline, type HeadlineLayer } from "@/lib/publishing/headline";
+import { computeHeadline, headlineChanges, headlineSchema, type Headline, type HeadlineLayer } from "@/lib/publishing/headline";
 import { nextVisibilityState, type VisibilityAction } from "@/lib/publishing/state";
 
 /** `scenario_versions.layer_versions`: layer kind → layer version id. */
@@ -91,4 +91,28 @@ export async function changeVersionVisibility({
     });
     return { scenario, before: version, after, headline };
   });
+}
+
+/**
+ * For the council summary: the headline frozen at publication beside the one Leeway computes today
+ * from the same scenario file and layer versions, and the figures that differ (an engine or model
+ * change since publication). `stored` is null for a version that was never published.
+ */
+export async function compareHeadlineWithToday({ scenarioId, number }: { scenarioId: number; number: number }) {
+  const [row] = await db
+    .select({ scenario: scenarios, version: scenarioVersions })
+    .from(scenarioVersions)
+    .innerJoin(scenarios, eq(scenarios.id, scenarioVersions.scenarioId))
+    .where(and(eq(scenarioVersions.scenarioId, scenarioId), eq(scenarioVersions.number, number)));
+  if (!row) throw new LeewayError("not-found", `There is no version ${number} of scenario ${scenarioId}.`);
+  const parsed = headlineSchema.safeParse(row.version.headline);
+  const stored = parsed.success ? parsed.data : null;
+  const today = computeHeadline({
+    scenarioName: row.scenario.name,
+    versionNumber: row.version.number,
+    params: row.version.params,
+    layers: await loadHeadlineLayers(db, row.version.layerVersions),
+    computedAt: new Date(),
+  });
+  return { stored, today, changes: stored ? headlineChanges(stored, today) : [] };
 }

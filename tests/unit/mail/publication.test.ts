@@ -3,7 +3,8 @@ import { and, eq } from "drizzle-orm";
 import { beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { DELETE as unpublish, POST as publish } from "@/app/api/scenarios/[scenarioId]/versions/[number]/publish/route";
 import { DELETE as unshare, POST as share } from "@/app/api/scenarios/[scenarioId]/versions/[number]/share/route";
-import { auditLog, scenarioVersions, users } from "@/db/schema";
+import { compareHeadlineWithToday } from "@/db/queries/publishing";
+import { auditLog, layerVersions, scenarioVersions, users } from "@/db/schema";
 import { CAUTION } from "@/lib/caution";
 import { headlineSchema } from "@/lib/publishing/headline";
 import { isVersionFrozen } from "@/lib/publishing/state";
@@ -120,5 +121,20 @@ describe("sharing for exercises", () => {
   it("answers 404 for a version that does not exist", async () => {
     app.signInAs("planner");
     expect((await call(share, "POST", 99)).status).toBe(404);
+  });
+});
+
+describe("the council summary's check against today's figures", () => {
+  it("finds no change right after publication, and names a figure that changed since", async () => {
+    app.signInAs("planner");
+    await call(publish, "POST", 1, { note: "Baseline" });
+    const fresh = await compareHeadlineWithToday({ scenarioId: app.fixture.scenarioId, number: 1 });
+    expect(fresh.stored).not.toBeNull();
+    expect(fresh.changes).toEqual([]);
+
+    // The layer version's figures are corrected after publication.
+    await app.db.update(layerVersions).set({ summary: { totalPopulation: 12_400 } }).where(eq(layerVersions.id, app.fixture.populationLayerVersionId));
+    const later = await compareHeadlineWithToday({ scenarioId: app.fixture.scenarioId, number: 1 });
+    expect(later.changes).toEqual([{ key: "layerPopulation", label: "People in the population layer", stored: 12_345, now: 12_400 }]);
   });
 });
