@@ -1,5 +1,5 @@
+import { apportion } from "./apportion";
 import type { LandGrid } from "./land-grid";
-import { apportion } from "./land-grid";
 import type { Terrain } from "./terrain";
 import type { KmPoint } from "./frame";
 
