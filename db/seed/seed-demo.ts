@@ -71,7 +71,12 @@ function layerPlans(region: Region): Record<"population" | "districts" | "facili
       kind: "population",
       name: `${region.name} population (demo)`,
       rowCount: pop.lon.length,
-      summary: { totalPopulation: pop.value.reduce((a, b) => a + b, 0), cellKm: POPULATION_CELL_KM },
+      // District indices of the cells point into these names, so readers need no districts layer to label them.
+      summary: {
+        totalPopulation: pop.value.reduce((a, b) => a + b, 0),
+        cellKm: POPULATION_CELL_KM,
+        districtNames: [...region.districts].sort((a, b) => a.idx - b.idx).map((d) => d.name),
+      },
       writeContents: async (tx, layerVersionId) => {
         const chunks = packGridChunks({ lon: pop.lon, lat: pop.lat, value: pop.value, district: pop.district });
         for (const chunk of chunks) await tx.insert(gridChunks).values({ layerVersionId, ...chunk });
