@@ -9,6 +9,7 @@ import { app, type Fixture } from "../support/app";
 import { issueAuthToken } from "@/db/queries/tokens";
 import { scenarios, scenarioVersions, users } from "@/db/schema";
 import { everyone, fromBrief, signedIn, type Expectation } from "./brief-roles";
+import { computableVersion } from "../exposure/fixture";
 
 export interface RouteCase {
   /** Shown in the test name when a row has several cases. */
@@ -61,6 +62,39 @@ const MATRIX_SCENARIO_FILE = {
   vs30: 400,
   area: { bbox: [149.5, -30.6, 150.9, -29.6], cellKm: 5 },
 };
+
+/** A version of the fixture's scenario holding a complete scenario file and the fixture's population layer, for the export routes. */
+async function exportableVersion(fixture: Fixture, state: "shared" | "published") {
+  const number = 4;
+  await app.db.insert(scenarioVersions).values({
+    scenarioId: fixture.scenarioId,
+    number,
+    params: MATRIX_SCENARIO_FILE,
+    layerVersions: { population: fixture.populationLayerVersionId },
+    state,
+    authorId: fixture.people.planner.id,
+  });
+  return { scenarioId: fixture.scenarioId, number };
+}
+
+const EXPORT_FILES = "map sheet, handout, GeoJSON, site CSV, scenario file, exercise CAP message" as const;
+const EXPOSURE_CSV = "print the council view; download exposure CSV" as const;
+
+/** The cases of a file export: a version shared for exercises (the trainer's) and a published one. */
+const fileExportCases = (query?: string): RouteCase[] => [
+  { name: "shared version", params: (f) => exportableVersion(f, "shared"), query, expect: fromBrief(EXPORT_FILES, 200) },
+  { name: "published version", params: (f) => exportableVersion(f, "published"), query, expect: fromBrief(EXPORT_FILES, 200) },
+];
+
+/**
+ * Exposure, its CSV and the threshold study of a version in each state: whoever may see a version
+ * may see its exposure (and every role may download exposure CSV of what it may see).
+ */
+const exposureCases = (query?: string): RouteCase[] => [
+  { name: "draft", params: () => computableVersion("draft"), query, expect: fromBrief("see draft scenarios", 200, { trainer: 403 }) },
+  { name: "shared", params: () => computableVersion("shared"), query, expect: fromBrief("see draft scenarios", 200, { trainer: 200 }) },
+  { name: "published", params: () => computableVersion("published"), query, expect: fromBrief("see published scenarios, their exposure and council view", 200) },
+];
 
 const versionParams = (number: keyof Fixture["versions"]) => (fixture: Fixture) => ({ scenarioId: fixture.scenarioId, number: fixture.versions[number] });
 
@@ -115,6 +149,20 @@ export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
   "DELETE /api/scenarios/[scenarioId]/versions/[number]/share": {
     cases: [{ params: versionParams("shared"), expect: fromBrief("share a scenario for exercises (no e-mail to council)", 200) }],
   },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/exposure": { cases: exposureCases() },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/exposure/csv": { cases: exposureCases("?table=class-band") },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/exports/cap": { cases: fileExportCases("?exercise=Matrix%20drill") },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/exports/contours": { cases: fileExportCases() },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/exports/sites": { cases: fileExportCases("?point=150.2,-30.0") },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/exports/scenario-file": { cases: fileExportCases() },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/exports/exposure": {
+    cases: [
+      // Council may download exposure CSV, but only of versions they may see (published).
+      { name: "shared version", params: (f) => exportableVersion(f, "shared"), expect: fromBrief(EXPOSURE_CSV, 200, { council: 403 }) },
+      { name: "published version", params: (f) => exportableVersion(f, "published"), query: "?table=district", expect: fromBrief(EXPOSURE_CSV, 200) },
+    ],
+  },
+  "GET /api/exports/[scenarioId]": { cases: [{ params: (f) => ({ scenarioId: f.scenarioId }), expect: signedIn(200) }] },
 };
 
 const PEOPLE = "people, roles, invitations, outbox, audit trail" as const;
