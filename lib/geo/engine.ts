@@ -11,14 +11,20 @@ import { lambertDistanceKm } from "./distance";
 import { getGroundMotionModel } from "./ground-motion/registry";
 import type { GroundMotionModel, ModelEarthquake, PreparedGroundMotion } from "./ground-motion/types";
 import { getIntensityScale, type IntensityScale } from "./intensity/scales";
-import { localOffsetKm } from "./local-frame";
+import { localOffsetKm, pointAtOffset } from "./local-frame";
+import { createPlaceValues, evaluateShaking } from "./place";
 import { LEEWAY_VERSION, type Provenance, type ProvenanceContext } from "./provenance";
+import { finiteRupture, type FiniteRupture } from "./source/finite-rupture";
 import { pointSource } from "./source/point-source";
 import { createSourceDistances, type SourceGeometry } from "./source/types";
+import { downDipWidthKm, subsurfaceRuptureLengthKm } from "./source/wells-coppersmith-1994";
+import { DEFAULT_RUPTURE_VELOCITY_FRACTION_OF_VS } from "@/lib/scenario/defaults";
+import { growingMagnitudeUpdates } from "./strategy/growing-magnitude";
 import { sourceStrategy } from "./strategy/source-strategy";
-import type { AlertStrategy } from "./strategy/types";
+import type { AlertStrategy, AlertUpdate } from "./strategy/types";
+import { wavefieldStrategy, type StationRecord } from "./strategy/wavefield-strategy";
 import { computeAlertTimeline, type AlertTimeline } from "./timeline";
-import { homogeneousModel, layeredModel, type VelocityModel } from "./velocity/models";
+import { homogeneousModel, layerAt, layeredModel, type VelocityModel } from "./velocity/models";
 import { firstArrival } from "./velocity/ray-travel-time";
 import { buildTravelTimeTable, type TravelTimeTable } from "./velocity/travel-time-table";
 import { buildVs30Lookup, type Vs30Cells, type Vs30Lookup } from "./vs30";
@@ -41,6 +47,8 @@ export interface Engine {
   /** Epicentral distance beyond which the first S is a head wave, km (Infinity for a homogeneous model). */
   sHeadWaveFromKm: number;
   source: SourceGeometry;
+  /** The finite rupture, when the scenario has one. */
+  rupture: FiniteRupture | null;
   model: GroundMotionModel;
   earthquake: ModelEarthquake;
   motion: PreparedGroundMotion;
@@ -91,6 +99,58 @@ function sHeadWaveFromKm(model: VelocityModel, depthKm: number): number {
   return hi;
 }
 
+/** What the per-place shaking calculation needs (everything but the alert decision). */
+export type ShakingEngine = Pick<
+  Engine,
+  "scenario" | "velocityModel" | "pTable" | "sTable" | "peakSTable" | "sHeadWaveFromKm" | "source" | "rupture" | "model" | "earthquake" | "motion" | "scale" | "vs30"
+>;
+
+/** The rupture rectangle with lengths from Wells & Coppersmith (1994) and the default rupture velocity where the file gives none. */
+function ruptureOf(scenario: ResolvedScenario, velocityModel: VelocityModel): FiniteRupture | null {
+  const { source } = scenario;
+  const r = source.rupture;
+  if (!r) return null;
+  return finiteRupture({
+    hypocentreDepthKm: source.depthKm,
+    strikeDeg: r.strikeDeg,
+    dipDeg: r.dipDeg,
+    lengthKm: r.lengthKm ?? subsurfaceRuptureLengthKm(source.mw),
+    widthKm: r.widthKm ?? downDipWidthKm(source.mw),
+    mode: r.mode ?? "unilateral",
+    ruptureVelocityKms: r.ruptureVelocityKms ?? DEFAULT_RUPTURE_VELOCITY_FRACTION_OF_VS.value * layerAt(velocityModel, source.depthKm).vsKms,
+  });
+}
+
+/** Points of the source's surface projection (the epicentre, and a lattice over a rupture's projection). */
+function sourceSurfacePoints(scenario: ResolvedScenario, rupture: FiniteRupture | null): [number, number][] {
+  const { lon, lat } = scenario.source;
+  const points: [number, number][] = [[lon, lat]];
+  if (!rupture) return points;
+  const [p0, p1, , p3] = rupture.cornersKm;
+  for (let i = 0; i <= 20; i++) {
+    for (let j = 0; j <= 4; j++) {
+      const x = p0[0] + ((p1[0] - p0[0]) * i) / 20 + ((p3[0] - p0[0]) * j) / 4;
+      const y = p0[1] + ((p1[1] - p0[1]) * i) / 20 + ((p3[1] - p0[1]) * j) / 4;
+      points.push(pointAtOffset(lon, lat, x, y));
+    }
+  }
+  return points;
+}
+
+/** Each operating station's predicted record for the wavefield strategy. */
+function stationRecords(engine: ShakingEngine): StationRecord[] {
+  const { lon: lon0, lat: lat0 } = engine.scenario.source;
+  const { telemetryS, processingS } = engine.scenario.timing;
+  const values = createPlaceValues();
+  return engine.scenario.stations
+    .filter((s) => s.operating)
+    .map((station) => {
+      const offset = localOffsetKm(lon0, lat0, station.lon, station.lat);
+      evaluateShaking(engine, offset.distanceKm, offset.eastKm, offset.northKm, engine.vs30.vs30At(station.lon, station.lat), values);
+      return { id: station.id, lon: station.lon, lat: station.lat, intensity: values.intensity, triggerS: values.peakShakingS + telemetryS + processingS };
+    });
+}
+
 /** The smallest model distance from the source to any point of the area, km. */
 function nearestModelDistanceKm(scenario: ResolvedScenario, source: SourceGeometry, model: GroundMotionModel, candidates: [number, number][]): number {
   const out = createSourceDistances();
@@ -111,6 +171,17 @@ function describeNotes(engine: Omit<Engine, "notes" | "provenance">): string[] {
   if (scenario.defaultsUsed.alert.length) notes.push(`default alert thresholds (${scenario.defaultsUsed.alert.join(", ")})`);
   if (engine.source.kind === "point" && scenario.source.mw >= 7) {
     notes.push("point-source approximation: shaking along the fault is underestimated");
+  }
+  const rupture = engine.rupture;
+  const given = scenario.source.rupture;
+  if (rupture && given) {
+    const sized = given.lengthKm === undefined || given.widthKm === undefined ? " (sizes from Wells & Coppersmith 1994, subsurface length and down-dip width)" : "";
+    notes.push(
+      `finite rupture ${rupture.spec.lengthKm.toFixed(1)} km × ${rupture.widthKm.toFixed(1)} km, ${rupture.spec.mode}, top ${rupture.topDepthKm.toFixed(1)} km, bottom ${rupture.bottomDepthKm.toFixed(1)} km${sized}`,
+    );
+    if (given.ruptureVelocityKms === undefined) {
+      notes.push(`rupture velocity ${rupture.spec.ruptureVelocityKms.toFixed(2)} km/s: 0.8 × Vs at the hypocentre (common practice, no source)`);
+    }
   }
   if (scenario.velocityModel.kind === "homogeneous" && scenario.source.depthKm > 35) {
     notes.push("homogeneous velocity model for a source deeper than 35 km: travel times ignore the crust and mantle layers");
@@ -159,7 +230,15 @@ export function prepareEngine(input: Scenario, options: EngineOptions = {}, extr
   const tableOptions = { depthMinKm: src.depthKm, depthMaxKm: src.depthKm, maxDistanceKm, distanceStepKm: 0.5 };
   const pTable = buildTravelTimeTable(velocityModel, "P", tableOptions);
   const sTable = buildTravelTimeTable(velocityModel, "S", tableOptions);
-  const source = pointSource(src.depthKm);
+  const rupture = ruptureOf(scenario, velocityModel);
+  const source = rupture ?? pointSource(src.depthKm);
+  const peakSTable = rupture
+    ? buildTravelTimeTable(velocityModel, "S", {
+        depthMinKm: rupture.topDepthKm,
+        depthMaxKm: rupture.bottomDepthKm,
+        maxDistanceKm: Math.min(TABLE_MAX_KM, reach + rupture.spec.lengthKm + rupture.widthKm + TABLE_MARGIN_KM),
+      })
+    : undefined;
   const model = getGroundMotionModel(scenario.groundMotionModel);
   const earthquake: ModelEarthquake = { mw: src.mw, depthKm: src.depthKm, faultType: src.faultType, mechanism: src.mechanism };
   const motion = model.prepare(earthquake);
@@ -171,33 +250,41 @@ export function prepareEngine(input: Scenario, options: EngineOptions = {}, extr
   });
   const vs30 = buildVs30Lookup(scenario.vs30, grid || undefined);
   const timeline = computeAlertTimeline(scenario, pTable);
-  const alertMagnitude = scenario.alert.magnitude === "growing" ? src.mw : scenario.alert.magnitude;
-  const strategy = sourceStrategy({
-    earthquake,
-    model,
-    scale,
-    issueAt: scenario.alert.issueAt,
-    areaAt: scenario.alert.areaAt,
-    updates: [{ issueS: timeline.alertIssuedS, mw: alertMagnitude }],
-    nearestModelDistanceKm: nearestModelDistanceKm(scenario, source, model, [[src.lon, src.lat]]),
-    softestVs30Ms: vs30.minVs30Ms,
-  });
-  const parts = {
+  const shaking: ShakingEngine = {
     scenario,
     velocityModel,
     pTable,
     sTable,
-    peakSTable: undefined,
+    peakSTable,
     sHeadWaveFromKm: sHeadWaveFromKm(velocityModel, src.depthKm),
     source,
+    rupture,
     model,
     earthquake,
     motion,
     scale,
     vs30,
-    timeline,
-    strategy,
-    log10PgvTarget: scale.log10PgvFor(scenario.alert.target),
   };
+  const { alert } = scenario;
+  let strategy: AlertStrategy;
+  if (alert.strategy === "wavefield") {
+    strategy = wavefieldStrategy({ stations: stationRecords(shaking), issueAt: alert.issueAt, areaAt: alert.areaAt, radiusKm: alert.wavefieldRadiusKm });
+  } else {
+    const updates: AlertUpdate[] =
+      alert.magnitude === "growing" && rupture
+        ? growingMagnitudeUpdates(rupture, src.mw, timeline.alertIssuedS)
+        : [{ issueS: timeline.alertIssuedS, mw: alert.magnitude === "growing" ? src.mw : alert.magnitude }];
+    strategy = sourceStrategy({
+      earthquake,
+      model,
+      scale,
+      issueAt: alert.issueAt,
+      areaAt: alert.areaAt,
+      updates,
+      nearestModelDistanceKm: nearestModelDistanceKm(scenario, source, model, sourceSurfacePoints(scenario, rupture)),
+      softestVs30Ms: vs30.minVs30Ms,
+    });
+  }
+  const parts = { ...shaking, timeline, strategy, log10PgvTarget: scale.log10PgvFor(alert.target) };
   return { ...parts, notes: describeNotes(parts), provenance: buildProvenance(parts, options) };
 }

@@ -3,7 +3,7 @@
  * grids and population cells — so the CLI, the worker and the server give identical numbers for
  * the same point and distance.
  */
-import type { Engine } from "./engine";
+import type { Engine, ShakingEngine } from "./engine";
 import { createSourceDistances, type SourceDistances } from "./source/types";
 import { createPlaceAlert, type PlaceAlert, type PlaceAlertEvaluator } from "./strategy/types";
 import { probabilityOfExceedance } from "./uncertainty";
@@ -56,7 +56,7 @@ export function createPlaceValues(): PlaceValues {
  * Travel times, distances and median shaking (true Mw) for a surface place `epicentralKm` from
  * the epicentre (east/north offsets for finite ruptures), on a site of `vs30Ms`.
  */
-export function evaluateShaking(engine: Engine, epicentralKm: number, eastKm: number, northKm: number, vs30Ms: number, out: PlaceValues): void {
+export function evaluateShaking(engine: ShakingEngine, epicentralKm: number, eastKm: number, northKm: number, vs30Ms: number, out: PlaceValues): void {
   const depthKm = engine.scenario.source.depthKm;
   engine.source.measure(epicentralKm, eastKm, northKm, out);
   out.epicentralKm = epicentralKm;
@@ -72,7 +72,7 @@ export function evaluateShaking(engine: Engine, epicentralKm: number, eastKm: nu
 }
 
 /** Strong shaking from a finite rupture: rupture time to the nearest point + S travel from it. */
-function peakShakingS(engine: Engine, d: SourceDistances): number {
+function peakShakingS(engine: ShakingEngine, d: SourceDistances): number {
   const table = engine.peakSTable;
   return d.ruptureTimeS + (table ? table.timeS(d.nearestHorizontalKm, d.nearestDepthKm) : Number.NaN);
 }

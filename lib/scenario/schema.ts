@@ -10,6 +10,7 @@ import { FAULT_TYPES, MECHANISMS } from "@/lib/geo/ground-motion/types";
 import { INTENSITY_SCALE_IDS } from "@/lib/geo/intensity/scales";
 import { LAYERED_MODEL_NAMES } from "@/lib/geo/velocity/models";
 import { gridGeometry, type GridGeometry } from "@/lib/geo/grid-geometry";
+import { wellsCoppersmithCovers } from "@/lib/geo/source/wells-coppersmith-1994";
 import { ALERT_STRATEGY_IDS } from "@/lib/geo/strategy/ids";
 
 /** Largest grid Leeway computes (cells). */
@@ -166,6 +167,18 @@ function checkCrossFields(scenario: ScenarioObject, ctx: z.RefinementCtx): void 
         path: ["groundMotionModel"],
         message: `${model.id} is for ${model.faultTypes.join("/")} sources only; this source is ${scenario.source.faultType}`,
       });
+    }
+  }
+  const rupture = scenario.source.rupture;
+  if (rupture && !wellsCoppersmithCovers(scenario.source.mw)) {
+    for (const key of ["lengthKm", "widthKm"] as const) {
+      if (rupture[key] === undefined) {
+        ctx.addIssue({
+          code: "custom",
+          path: ["source", "rupture", key],
+          message: `rupture ${key === "lengthKm" ? "length" : "width"} is required for Mw ${scenario.source.mw}: Wells & Coppersmith (1994) cover M 4.8–8.1 only`,
+        });
+      }
     }
   }
   if (scenario.alert?.magnitude === "growing" && !scenario.source.rupture) {
