@@ -1,0 +1,66 @@
+import { Geodesic } from "geographiclib-geodesic";
+import { describe, expect, it } from "vitest";
+import { dragRuptureEnd, ruptureTraceEnds } from "@/lib/workspace/rupture-trace";
+import { PREVIEW_MIN_CELLS_PER_SIDE, previewGrid } from "@/lib/workspace/preview-area";
+
+/** Distance (km) and azimuth (°) by GeographicLib, the reference for every check here. */
+function inverse(a: { lon: number; lat: number }, b: { lon: number; lat: number }) {
+  const r = Geodesic.WGS84.Inverse(a.lat, a.lon, b.lat, b.lon);
+  return { km: (r.s12 ?? NaN) / 1000, azimuthDeg: ((r.azi1 ?? NaN) + 360) % 360 };
+}
+
+const EPICENTRE = { lon: -126.2, lat: -46.9 };
+
+describe("rupture trace on the ellipsoid (checked with GeographicLib)", () => {
+  it("puts a unilateral rupture's start at the epicentre and its end lengthKm along strike", () => {
+    const { start, end } = ruptureTraceEnds(EPICENTRE, { strikeDeg: 40, lengthKm: 120, mode: "unilateral" });
+    expect(inverse(EPICENTRE, start).km).toBeLessThan(1e-6);
+    const toEnd = inverse(start, end);
+    expect(toEnd.km).toBeCloseTo(120, 6);
+    expect(toEnd.azimuthDeg).toBeCloseTo(40, 6);
+  });
+
+  it("centres a bilateral rupture on the epicentre", () => {
+    const { start, end } = ruptureTraceEnds(EPICENTRE, { strikeDeg: 300, lengthKm: 80, mode: "bilateral" });
+    expect(inverse(EPICENTRE, start).km).toBeCloseTo(40, 6);
+    expect(inverse(EPICENTRE, end).km).toBeCloseTo(40, 6);
+    expect(inverse(start, end).km).toBeCloseTo(80, 4);
+  });
+
+  it("dragging the end keeps the start: length and strike are the start-to-end geodesic", () => {
+    const rupture = { strikeDeg: 40, lengthKm: 120, mode: "unilateral" as const };
+    const to = { lon: -125.1, lat: -46.2 };
+    const moved = dragRuptureEnd(EPICENTRE, rupture, "end", to);
+    const reference = inverse(EPICENTRE, to);
+    expect(moved.epicentre).toEqual(EPICENTRE);
+    expect(moved.lengthKm).toBeCloseTo(reference.km, 3);
+    expect(moved.strikeDeg).toBeCloseTo(reference.azimuthDeg, 1);
+  });
+
+  it("dragging a bilateral start keeps the end and moves the epicentre to the middle", () => {
+    const rupture = { strikeDeg: 90, lengthKm: 60, mode: "bilateral" as const };
+    const { end } = ruptureTraceEnds(EPICENTRE, rupture);
+    const to = { lon: -127.0, lat: -47.2 };
+    const moved = dragRuptureEnd(EPICENTRE, rupture, "start", to);
+    expect(moved.lengthKm).toBeCloseTo(inverse(to, end).km, 3);
+    expect(inverse(moved.epicentre, to).km).toBeCloseTo(moved.lengthKm / 2, 1);
+    expect(inverse(moved.epicentre, end).km).toBeCloseTo(moved.lengthKm / 2, 1);
+  });
+});
+
+describe("preview grid", () => {
+  const area: [number, number, number, number] = [-128.6, -49, -123.7, -44.9];
+
+  it("has at least 200 cells across the shorter side of the visible part of the area", () => {
+    for (const visible of [area, [-127, -47.5, -125.5, -46.5], [-126.3, -47, -126.1, -46.9]] as [number, number, number, number][]) {
+      const preview = previewGrid(visible, area);
+      expect(Math.min(preview.width, preview.height)).toBeGreaterThanOrEqual(PREVIEW_MIN_CELLS_PER_SIDE);
+      expect(preview.maxCells).toBe(preview.width * preview.height);
+    }
+  });
+
+  it("covers only the part of the view inside the area, and the whole area when none of it is in view", () => {
+    expect(previewGrid([-130, -50, -126, -46], area).bbox).toEqual([-128.6, -49, -126, -46]);
+    expect(previewGrid([0, 0, 1, 1], area).bbox).toEqual(area);
+  });
+});
