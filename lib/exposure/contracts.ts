@@ -116,7 +116,7 @@ export const versionRefSchema = z.object({
 export type VersionRef = z.infer<typeof versionRefSchema>;
 
 /** GET …/exposure answers with this. */
-export const exposureResponseSchema = z.object({ version: versionRefSchema, cached: z.boolean(), exposure: exposureResultSchema });
+export const exposureResponseSchema = z.object({ caution: z.string(), version: versionRefSchema, cached: z.boolean(), exposure: exposureResultSchema });
 export type ExposureResponse = z.infer<typeof exposureResponseSchema>;
 
 /** One setting of the alert-area threshold and what it gives (expected counts, METHODS.md §9). */
@@ -147,7 +147,7 @@ export const thresholdStudySchema = z.object({
 });
 export type ThresholdStudy = z.infer<typeof thresholdStudySchema>;
 
-export const thresholdStudyResponseSchema = z.object({ version: versionRefSchema, cached: z.boolean(), study: thresholdStudySchema });
+export const thresholdStudyResponseSchema = z.object({ caution: z.string(), version: versionRefSchema, cached: z.boolean(), study: thresholdStudySchema });
 export type ThresholdStudyResponse = z.infer<typeof thresholdStudyResponseSchema>;
 
 /** A facility whose action fits in one version and not in the other. */
