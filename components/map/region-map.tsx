@@ -1,6 +1,7 @@
 "use client";
 
 import type { FeatureCollection } from "geojson";
+import type { LayerSpecification, SourceSpecification } from "@maplibre/maplibre-gl-style-spec";
 import type { GeoJSONSource, Map as MapLibreMap } from "maplibre-gl";
 import "maplibre-gl/dist/maplibre-gl.css";
 import { useEffect, useRef, useState } from "react";
@@ -8,7 +9,7 @@ import { CAUTION } from "@/lib/caution";
 import { sourcesToGeoJson, stationsToGeoJson, type MapSource, type MapStation } from "@/lib/map/overlays";
 import { extendBounds, type Bounds } from "@/lib/map/bounds";
 import { BASEMAP_BOUNDS, buildMapStyle, LAND_BOUNDS } from "@/lib/map/style";
-import { OVERLAY_SOURCE_IDS, REGION_MAP_LAYERS } from "./layers";
+import { MAP_LAYER_IDS, OVERLAY_SOURCE_IDS, REGION_MAP_LAYERS } from "./layers";
 import { MapLegend } from "./map-legend";
 import { ZoomButtons } from "./zoom-buttons";
 
@@ -33,6 +34,26 @@ export interface RegionMapProps {
   overlay?: FeatureCollection;
   /** Drawn over the map, top left (panels, extra legends). */
   children?: React.ReactNode;
+  /** Further layers with their own sources (e.g. the workspace's results), fixed for the map's lifetime. */
+  extension?: MapExtension;
+  /** Called once the style has loaded, with the live map: the caller sets its sources' data and listens to events. */
+  onReady?: (map: MapLibreMap) => void;
+}
+
+/** Layers a caller adds to the region map, and the sources they draw from. */
+export interface MapExtension {
+  sources: Record<string, SourceSpecification>;
+  /** Drawn just above the land, under the basemap's lines, towns and labels. */
+  below: LayerSpecification[];
+  /** Drawn on top of everything. */
+  above: LayerSpecification[];
+}
+
+/** The region map's layers with an extension's put in place. */
+function extendLayers(extension: MapExtension | undefined): LayerSpecification[] {
+  if (!extension) return REGION_MAP_LAYERS;
+  const afterLand = REGION_MAP_LAYERS.findIndex((layer) => layer.id === MAP_LAYER_IDS.land) + 1;
+  return [...REGION_MAP_LAYERS.slice(0, afterLand), ...extension.below, ...REGION_MAP_LAYERS.slice(afterLand), ...extension.above];
 }
 
 const NO_FEATURES: FeatureCollection = { type: "FeatureCollection", features: [] };
@@ -58,11 +79,13 @@ const FIT_PADDING_PX = 32;
  * `data-map-idle="true"`. The live map is also put on `window.__leewayMap` (always, not only in tests):
  * browser tests query rendered features through it.
  */
-export function RegionMap({ stations, sources, bounds, provenance, overlay, children }: RegionMapProps) {
+export function RegionMap({ stations, sources, bounds, provenance, overlay, children, extension, onReady }: RegionMapProps) {
   const containerRef = useRef<HTMLDivElement>(null);
   const mapRef = useRef<MapLibreMap | null>(null);
   // The latest overlay data: the map is created asynchronously (after the import) and reads it then.
   const overlayRef = useRef({ stations, sources, layer: overlay });
+  // Read once when the map is created, like `bounds`.
+  const extensionRef = useRef({ extension, onReady });
   const fitBounds = useRef<Bounds>(bounds ?? extendBounds(LAND_BOUNDS, sources));
   const [idle, setIdle] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
@@ -80,8 +103,9 @@ export function RegionMap({ stations, sources, bounds, provenance, overlay, chil
         container,
         style: buildMapStyle({
           origin: window.location.origin,
-          layers: REGION_MAP_LAYERS,
+          layers: extendLayers(extensionRef.current.extension),
           sources: {
+            ...extensionRef.current.extension?.sources,
             [OVERLAY_SOURCE_IDS.stations]: { type: "geojson", data: stationsToGeoJson(overlayRef.current.stations) },
             [OVERLAY_SOURCE_IDS.sources]: { type: "geojson", data: sourcesToGeoJson(overlayRef.current.sources) },
             [OVERLAY_SOURCE_IDS.layer]: { type: "geojson", data: overlayRef.current.layer ?? NO_FEATURES },
@@ -105,7 +129,10 @@ export function RegionMap({ stations, sources, bounds, provenance, overlay, chil
       window.__leewayMap = map;
       map.addControl(new maplibregl.ScaleControl({ maxWidth: 140, unit: "metric" }), "bottom-left");
       // Props that changed while the style was loading have no source to go to yet: apply them now.
-      map.once("load", () => applyOverlays(map, overlayRef.current));
+      map.once("load", () => {
+        applyOverlays(map, overlayRef.current);
+        extensionRef.current.onReady?.(map);
+      });
       map.once("idle", () => setIdle(true));
       map.on("error", (event) => console.error("map:", event.error?.message ?? event));
     })().catch((error: unknown) => setFailure(error instanceof Error ? error.message : String(error)));
