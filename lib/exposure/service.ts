@@ -20,7 +20,8 @@ import { LEEWAY_VERSION } from "@/lib/geo";
 import { parseScenario } from "@/lib/scenario/schema";
 import { resultCacheKey } from "./cache-key";
 import { computeExposureResult } from "./compute-exposure";
-import { exposureResultSchema, type ExposureResult, type VersionRef } from "./contracts";
+import { exposureResultSchema, thresholdStudySchema, type ExposureResult, type ThresholdStudy, type VersionRef } from "./contracts";
+import { computeThresholdStudy } from "./threshold-study";
 import { withWorkspaceScale, type ExposureInputs, type WorkspaceExposureSettings } from "./inputs";
 
 /** A scenario version as the exposure services load it. */
@@ -127,4 +128,20 @@ export async function exposureOf(version: LoadedVersion, { db, now = new Date() 
     db,
   });
   return { exposure: value, cached: hit };
+}
+
+const THRESHOLD_PREFIX = "threshold-study:";
+
+/** The alert-threshold study of a loaded version, from the cache when its inputs are unchanged. */
+export async function thresholdStudyOf(version: LoadedVersion, { db, now = new Date() }: { db?: Database; now?: Date } = {}): Promise<{ study: ThresholdStudy; cached: boolean }> {
+  const settings = await readWorkspaceExposureSettings({ db });
+  const { value, cached: hit } = await cached({
+    key: versionCacheKey(THRESHOLD_PREFIX, version, settings),
+    replaces: THRESHOLD_PREFIX,
+    scenarioVersionId: version.row.id,
+    parse: (stored) => thresholdStudySchema.safeParse(stored).data,
+    compute: async () => computeThresholdStudy(await loadInputs(version, settings, { db, now })),
+    db,
+  });
+  return { study: value, cached: hit };
 }

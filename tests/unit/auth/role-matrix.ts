@@ -151,6 +151,8 @@ export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
   },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exposure": { cases: exposureCases() },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exposure/csv": { cases: exposureCases("?table=class-band") },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/threshold-study": { cases: exposureCases() },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/threshold-study/csv": { cases: exposureCases() },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/cap": { cases: fileExportCases("?exercise=Matrix%20drill") },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/contours": { cases: fileExportCases() },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/sites": { cases: fileExportCases("?point=150.2,-30.0") },
