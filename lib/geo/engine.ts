@@ -122,7 +122,7 @@ function ruptureOf(scenario: ResolvedScenario, velocityModel: VelocityModel): Fi
 }
 
 /** Points of the source's surface projection (the epicentre, and a lattice over a rupture's projection). */
-function sourceSurfacePoints(scenario: ResolvedScenario, rupture: FiniteRupture | null): [number, number][] {
+function sourceSurfacePoints(scenario: ResolvedScenario, rupture: Pick<FiniteRupture, "cornersKm"> | null): [number, number][] {
   const { lon, lat } = scenario.source;
   const points: [number, number][] = [[lon, lat]];
   if (!rupture) return points;
@@ -270,10 +270,14 @@ export function prepareEngine(input: Scenario, options: EngineOptions = {}, extr
   if (alert.strategy === "wavefield") {
     strategy = wavefieldStrategy({ stations: stationRecords(shaking), issueAt: alert.issueAt, areaAt: alert.areaAt, radiusKm: alert.wavefieldRadiusKm });
   } else {
-    const updates: AlertUpdate[] =
-      alert.magnitude === "growing" && rupture
-        ? growingMagnitudeUpdates(rupture, src.mw, timeline.alertIssuedS)
-        : [{ issueS: timeline.alertIssuedS, mw: alert.magnitude === "growing" ? src.mw : alert.magnitude }];
+    const growing = alert.magnitude === "growing" && rupture !== null;
+    const updates: AlertUpdate[] = growing
+      ? growingMagnitudeUpdates(rupture, src.mw, timeline.alertIssuedS)
+      : [{ issueS: timeline.alertIssuedS, mw: alert.magnitude === "growing" ? src.mw : alert.magnitude }];
+    // A growing rupture's messages predict from the part broken so far; the last one is the whole rupture.
+    const updateSources = updates.map((u) =>
+      growing && rupture && u.brokenLengthKm !== undefined && u.brokenLengthKm < rupture.spec.lengthKm ? finiteRupture({ ...rupture.spec, lengthKm: Math.max(0.1, u.brokenLengthKm) }) : null,
+    );
     strategy = sourceStrategy({
       earthquake,
       model,
@@ -281,7 +285,11 @@ export function prepareEngine(input: Scenario, options: EngineOptions = {}, extr
       issueAt: alert.issueAt,
       areaAt: alert.areaAt,
       updates,
-      nearestModelDistanceKm: nearestModelDistanceKm(scenario, source, model, sourceSurfacePoints(scenario, rupture)),
+      updateSources,
+      nearestModelDistanceKm: updateSources.map((partial) => {
+        const s = partial ?? source;
+        return nearestModelDistanceKm(scenario, s, model, sourceSurfacePoints(scenario, partial ?? rupture));
+      }),
       softestVs30Ms: vs30.minVs30Ms,
     });
   }

@@ -9,9 +9,11 @@ import type { Scenario } from "@/lib/scenario/schema";
 import { havLongitude, lambertDistanceFromTermsKm, lambertLatitudeTerms, type LambertLatitudeTerms } from "./distance";
 import { prepareEngine, type Engine, type EngineOptions } from "./engine";
 import type { IntensityScaleId } from "./intensity/scales";
-import { createPlaceValues, evaluateAlert, evaluateShaking, pExceedTarget } from "./place";
+import { createPlaceValues, evaluateAlert, evaluateShaking, pExceedTarget, type PlaceValues } from "./place";
 import { CAUTION, type Provenance } from "./provenance";
 import { roundLargestRemainder } from "./rounding";
+import { ALERT_STRATEGY_IDS, type AlertStrategyId } from "./strategy/ids";
+import { probabilityOfExceedance } from "./uncertainty";
 import { NO_ALERT_BAND, warningBandIndex, warningBands, type WarningBand } from "./warning";
 import { reducedLatitudeRad } from "./wgs84";
 
@@ -83,6 +85,18 @@ export interface ExpectedOutcomes {
   note: string;
 }
 
+/**
+ * The expected share of alerted people whose shaking falls within one class of the class the
+ * alert predicted for them (ground-motion scatter only). Given only when the alert-time magnitude
+ * differs from Mw: otherwise it depends on sigma and the class widths alone (METHODS.md §9).
+ */
+export interface WithinOneClass {
+  share: number;
+  /** Alert-time magnitude minus Mw (the first message's, for a growing magnitude). */
+  alertMagnitudeErrorMw: number;
+  label: string;
+}
+
 /** Result of `computeExposure`. */
 export interface ExposureResult {
   totalPopulation: number;
@@ -102,6 +116,7 @@ export interface ExposureResult {
   /** Alerted people who can complete each action (warning ≥ reaction + action seconds). */
   actions: { id: string; seconds: number; population: number }[];
   expected: ExpectedOutcomes;
+  withinOneClass: WithinOneClass | null;
   alertIssued: boolean;
   notes: string[];
   caution: string;
@@ -118,6 +133,9 @@ interface Tallies {
   needless: number;
   late: number;
   missed: number;
+  /** Alerted people weighted by P(actual class within one of the predicted one), and the alerted people counted. */
+  withinOneClass: number;
+  withinOneClassOf: number;
 }
 
 /** Computes exposure with an engine already prepared for the scenario. */
@@ -139,7 +157,12 @@ export function computeExposureWith(engine: Engine, cells: PopulationCells, opti
     needless: 0,
     late: 0,
     missed: 0,
+    withinOneClass: 0,
+    withinOneClassOf: 0,
   };
+  const mw = engine.scenario.source.mw;
+  const magnitudeDiffers = engine.strategy.id === "source" && engine.strategy.updates.some((u) => u.mw !== mw);
+  const bounds = engine.scale.classLowerBounds;
   const { lon: lon0, lat: lat0 } = engine.scenario.source;
   const originBeta = reducedLatitudeRad(lat0);
   const sinB1 = Math.sin(originBeta);
@@ -194,9 +217,35 @@ export function computeExposureWith(engine: Engine, cells: PopulationCells, opti
     if (alerted) {
       t.needless += people * (1 - p);
       if (v.warningS <= 0) t.late += people * p;
+      if (magnitudeDiffers) {
+        const predictedClass = engine.scale.classIndex(v.alert.predictedIntensity);
+        const lower = predictedClass >= 2 ? bounds[predictedClass - 2] : -Infinity;
+        const upper = predictedClass + 1 < bounds.length ? bounds[predictedClass + 1] : Infinity;
+        t.withinOneClass += people * (exceedance(engine, v, lower) - exceedance(engine, v, upper));
+        t.withinOneClassOf += people;
+      }
     } else t.missed += people * p;
   }
   return summarize(engine, t, Math.round(total), { bands, classes, districtNames, actions });
+}
+
+/** P(intensity ≥ `intensity`) at a place; 1 below every value, 0 above. */
+function exceedance(engine: Engine, v: PlaceValues, intensity: number): number {
+  if (intensity === -Infinity) return 1;
+  if (intensity === Infinity) return 0;
+  return probabilityOfExceedance(v.log10PgvCms, engine.scale.log10PgvFor(intensity), engine.motion.sigmaLog10Pgv(v.modelDistanceKm, v.vs30Ms));
+}
+
+/** The within-one-class figure, when the alert-time magnitude differs from Mw. */
+function withinOneClassOf(engine: Engine, t: Tallies): WithinOneClass | null {
+  if (t.withinOneClassOf === 0) return null;
+  const first = engine.strategy.updates[Math.max(0, engine.strategy.firstUpdateIndex)];
+  const error = first.mw - engine.scenario.source.mw;
+  return {
+    share: t.withinOneClass / t.withinOneClassOf,
+    alertMagnitudeErrorMw: error,
+    label: `share of alerted people whose shaking is within one class of the alert's prediction, with the alert magnitude ${error >= 0 ? "+" : "−"}${Math.abs(error).toFixed(1)} from Mw (ground-motion scatter only)`,
+  };
 }
 
 function summarize(
@@ -294,6 +343,7 @@ function summarize(
       target: engine.scenario.alert.target,
       note: "expected counts from ground-motion scatter only (conversion scatter left out); residuals are correlated between places, so no ranges are given",
     },
+    withinOneClass: withinOneClassOf(engine, t),
     alertIssued: engine.strategy.issued,
   };
 }
@@ -326,4 +376,38 @@ function samplePoints(cells: PopulationCells): [number, number][] {
     n = Math.max(n, cells.lat[i]);
   }
   return cells.lon.length ? [[w, s], [w, n], [e, s], [e, n]] : [];
+}
+
+/** One alert strategy's key figures, for side-by-side comparison. */
+export interface StrategyComparison {
+  strategy: AlertStrategyId;
+  label: string;
+  alertIssued: boolean;
+  alertedPopulation: number;
+  alertedWithWarningPopulation: number;
+  blindZonePopulation: number;
+  noAlertPopulation: number;
+  expected: ExpectedOutcomes;
+  /** Primary channel: people per warning band. */
+  bands: ChannelExposure["bands"];
+}
+
+/** The same population under every alert strategy (the scenario's other settings unchanged). */
+export function compareStrategies(scenario: Scenario, population: PopulationCells, options: ExposureOptions = {}): StrategyComparison[] {
+  return ALERT_STRATEGY_IDS.map((strategy) => {
+    const variant: Scenario = { ...scenario, alert: { ...scenario.alert, strategy } };
+    const engine = prepareEngine(variant, options, samplePoints(population));
+    const r = computeExposureWith(engine, population, options);
+    return {
+      strategy,
+      label: engine.strategy.label,
+      alertIssued: r.alertIssued,
+      alertedPopulation: r.alertedPopulation,
+      alertedWithWarningPopulation: r.alertedWithWarningPopulation,
+      blindZonePopulation: r.blindZonePopulation,
+      noAlertPopulation: r.noAlertPopulation,
+      expected: r.expected,
+      bands: r.byChannel[0].bands,
+    };
+  });
 }

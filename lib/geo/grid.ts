@@ -79,6 +79,10 @@ export interface GridSummary {
   /** Primary channel, warning ≤ 0, alerted or not. */
   blindZoneAreaKm2: number;
   alertAreaKm2: number;
+  /** Area alerted by the first message (smaller than alertAreaKm2 when the magnitude grows). */
+  firstAlertAreaKm2: number;
+  /** Alert messages (issue time, magnitude; NaN magnitude for the wavefield strategy). */
+  alertUpdates: { issueS: number; mw: number | null }[];
   /** Cells no alert can reach (wavefield strategy far from stations). */
   noAlertAreaKm2: number;
   minWarningS: number | null;
@@ -138,13 +142,15 @@ interface RowBuffers {
   pExceed: Float64Array;
   alerted: Uint8Array;
   extrapolated: Uint8Array;
+  /** The strategy update that alerts the cell (−1: none). */
+  updateIndex: Int16Array;
 }
 
 function rowBuffers(width: number): RowBuffers {
   const f = () => new Float64Array(width);
   return {
     pArrivalS: f(), sArrivalS: f(), peakShakingS: f(), issueS: f(), warningS: f(), log10Pgv: f(), log10Pga: f(),
-    intensity: f(), pExceed: f(), alerted: new Uint8Array(width), extrapolated: new Uint8Array(width),
+    intensity: f(), pExceed: f(), alerted: new Uint8Array(width), extrapolated: new Uint8Array(width), updateIndex: new Int16Array(width),
   };
 }
 
@@ -200,6 +206,7 @@ function sweepGrid(engine: Engine, geometry: GridGeometry, withDetail: boolean, 
       b.intensity[c] = v.intensity;
       b.alerted[c] = v.alert.alerted ? 1 : 0;
       b.extrapolated[c] = v.extrapolated ? 1 : 0;
+      b.updateIndex[c] = v.alert.updateIndex;
       if (withDetail) {
         b.log10Pga[c] = engine.motion.log10PgaCms2(v.modelDistanceKm, vs30Ms);
         b.pExceed[c] = pExceedTarget(engine, v);
@@ -217,6 +224,8 @@ function summaryAccumulator(engine: Engine, geometry: GridGeometry) {
   const channelBlind = new Float64Array(channels.length);
   let blind = 0;
   let alertArea = 0;
+  let firstAlertArea = 0;
+  const firstUpdate = engine.strategy.firstUpdateIndex;
   let noAlert = 0;
   let minWarning = Infinity;
   let maxWarning = -Infinity;
@@ -238,6 +247,7 @@ function summaryAccumulator(engine: Engine, geometry: GridGeometry) {
         }
         if (b.alerted[c]) {
           alertArea += area;
+          if (b.updateIndex[c] === firstUpdate) firstAlertArea += area;
           if (w > alertedMaxWarning) alertedMaxWarning = w;
         }
         if (b.intensity[c] > maxIntensity) maxIntensity = b.intensity[c];
@@ -255,6 +265,8 @@ function summaryAccumulator(engine: Engine, geometry: GridGeometry) {
         bbox: geometry.bbox,
         blindZoneAreaKm2: blind,
         alertAreaKm2: alertArea,
+        firstAlertAreaKm2: firstAlertArea,
+        alertUpdates: engine.strategy.updates.map((u) => ({ issueS: u.issueS, mw: Number.isNaN(u.mw) ? null : u.mw })),
         noAlertAreaKm2: noAlert,
         minWarningS: finiteOrNull(minWarning),
         maxWarningS: finiteOrNull(maxWarning),

@@ -31,6 +31,9 @@ export {
 export {
   computeExposure,
   computeExposureWith,
+  compareStrategies,
+  type StrategyComparison,
+  type WithinOneClass,
   type PopulationCells,
   type ProtectiveAction,
   type ExposureOptions,
@@ -40,6 +43,9 @@ export {
   type ChannelExposure,
   type ExpectedOutcomes,
 } from "./exposure";
+export { finiteRupture, type FiniteRupture, type FiniteRuptureSpec } from "./source/finite-rupture";
+export { subsurfaceRuptureLengthKm, downDipWidthKm, ruptureAreaKm2, wellsCoppersmithCovers } from "./source/wells-coppersmith-1994";
+export { growingMagnitudeAt, growingMagnitudeUpdates } from "./strategy/growing-magnitude";
 export { evaluateFacilities, type LineFacility, type LineResult, type FacilitiesResult } from "./facilities";
 export { actionFits, actionsThatFit } from "./actions";
 export { prepareEngine, type Engine, type EngineOptions } from "./engine";

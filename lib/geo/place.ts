@@ -5,12 +5,16 @@
  */
 import type { Engine, ShakingEngine } from "./engine";
 import { createSourceDistances, type SourceDistances } from "./source/types";
-import { createPlaceAlert, type PlaceAlert, type PlaceAlertEvaluator } from "./strategy/types";
+import { createPlaceAlert, type PlaceAlert, type PlaceAlertEvaluator, type PlaceContext } from "./strategy/types";
 import { probabilityOfExceedance } from "./uncertainty";
 
 /** Values for one place (s after origin, km, cm/s, intensity on the scenario's scale). */
-export interface PlaceValues extends SourceDistances {
+export interface PlaceValues extends SourceDistances, PlaceContext {
+  lonDeg: number;
+  latDeg: number;
   epicentralKm: number;
+  eastKm: number;
+  northKm: number;
   /** The ground-motion model's distance (rupture or Joyner–Boore), km. */
   modelDistanceKm: number;
   pArrivalS: number;
@@ -36,7 +40,11 @@ export interface PlaceValues extends SourceDistances {
 export function createPlaceValues(): PlaceValues {
   return {
     ...createSourceDistances(),
+    lonDeg: 0,
+    latDeg: 0,
     epicentralKm: 0,
+    eastKm: 0,
+    northKm: 0,
     modelDistanceKm: 0,
     pArrivalS: 0,
     sArrivalS: 0,
@@ -60,6 +68,8 @@ export function evaluateShaking(engine: ShakingEngine, epicentralKm: number, eas
   const depthKm = engine.scenario.source.depthKm;
   engine.source.measure(epicentralKm, eastKm, northKm, out);
   out.epicentralKm = epicentralKm;
+  out.eastKm = eastKm;
+  out.northKm = northKm;
   out.pArrivalS = engine.pTable.timeS(epicentralKm, depthKm);
   out.sArrivalS = engine.sTable.timeS(epicentralKm, depthKm);
   out.peakShakingS = engine.source.kind === "point" ? out.sArrivalS : peakShakingS(engine, out);
@@ -79,7 +89,9 @@ function peakShakingS(engine: ShakingEngine, d: SourceDistances): number {
 
 /** The alert decision and primary-channel warning for a place whose shaking is in `out`. */
 export function evaluateAlert(engine: Engine, evaluator: PlaceAlertEvaluator, index: number, lonDeg: number, latDeg: number, out: PlaceValues): void {
-  evaluator.evaluate(index, lonDeg, latDeg, out.modelDistanceKm, out.vs30Ms, out.intensity, out.alert);
+  out.lonDeg = lonDeg;
+  out.latDeg = latDeg;
+  evaluator.evaluate(index, out, out.alert);
   out.alertS = out.alert.issueS + engine.timeline.channels[0].deliveryS;
   out.warningS = out.sArrivalS - out.alertS;
 }

@@ -55,6 +55,8 @@ export interface SiteResult {
   intensityClass: string;
   /** Intensity the system predicts at alert time, on the scenario's scale. */
   predictedIntensity: number;
+  /** The magnitude behind that prediction (null for the wavefield strategy). */
+  alertMw: number | null;
   pgvCms: number;
   pgaCms2: number;
   jmaIntensity: number;
@@ -112,6 +114,7 @@ export function evaluateSites(engine: Engine, sites: readonly SiteInput[]): Site
       intensity: values.intensity,
       intensityClass: engine.scale.classes[engine.scale.classIndex(values.intensity)],
       predictedIntensity: values.alert.predictedIntensity,
+      alertMw: orNull(values.alert.alertMagnitude),
       pgvCms: 10 ** values.log10PgvCms,
       pgaCms2: 10 ** engine.motion.log10PgaCms2(values.modelDistanceKm, vs30Ms),
       jmaIntensity,

@@ -2,12 +2,14 @@
  * The source-based alert (METHODS.md §2): the system estimates the source, predicts intensity
  * everywhere with the magnitude it has at alert time, issues an alert when the largest prediction
  * in the area reaches `issueAt`, and sends it to places predicted at `areaAt` or more.
- * With several updates (a magnitude that grows), a place is alerted by the first update that
- * predicts `areaAt` there; predictions grow with magnitude, so the search is a bisection.
+ * With several updates (a magnitude that grows), each update predicts from the rupture broken so
+ * far, and a place is alerted by the first update that predicts `areaAt` there; predictions grow
+ * from one update to the next (larger magnitude, nearer source), so the search is a bisection.
  */
 import type { GroundMotionModel, ModelEarthquake, PreparedGroundMotion } from "../ground-motion/types";
 import type { IntensityScale } from "../intensity/scales";
-import type { AlertStrategy, AlertUpdate, PlaceAlert, PlaceAlertEvaluator } from "./types";
+import { createSourceDistances, type SourceGeometry } from "../source/types";
+import type { AlertStrategy, AlertUpdate, PlaceAlert, PlaceAlertEvaluator, PlaceContext } from "./types";
 
 /** What the source strategy needs from the prepared scenario. */
 export interface SourceStrategyInputs {
@@ -18,8 +20,11 @@ export interface SourceStrategyInputs {
   areaAt: number;
   /** Alert messages in time order, with the magnitude each one uses. */
   updates: AlertUpdate[];
-  /** The smallest model distance from the source to the area, km, and the softest Vs30 in it (m/s). */
-  nearestModelDistanceKm: number;
+  /** The source each update predicts from (null: the scenario's full source). */
+  updateSources: (SourceGeometry | null)[];
+  /** Per update: the smallest model distance from its source to the area, km. */
+  nearestModelDistanceKm: number[];
+  /** The softest Vs30 in the area, m/s. */
   softestVs30Ms: number;
 }
 
@@ -27,27 +32,39 @@ export interface SourceStrategyInputs {
 export function sourceStrategy(inputs: SourceStrategyInputs): AlertStrategy {
   const { scale, updates, areaAt } = inputs;
   const motions: PreparedGroundMotion[] = updates.map((u) => inputs.model.prepare({ ...inputs.earthquake, mw: u.mw }));
-  const usesTrueMagnitude = updates.map((u) => u.mw === inputs.earthquake.mw);
-  const peaks = motions.map((m) => scale.fromLog10Pgv(m.log10PgvCms(inputs.nearestModelDistanceKm, inputs.softestVs30Ms)));
+  const { updateSources } = inputs;
+  const usesPlaceIntensity = updates.map((u, k) => u.mw === inputs.earthquake.mw && updateSources[k] === null);
+  const peaks = motions.map((m, k) => scale.fromLog10Pgv(m.log10PgvCms(inputs.nearestModelDistanceKm[k], inputs.softestVs30Ms)));
+  const distances = createSourceDistances();
+  const distanceKind = inputs.model.distanceKind;
   const issueIndex = peaks.findIndex((peak) => peak >= inputs.issueAt);
   const issued = issueIndex >= 0;
   const decidingIndex = issued ? issueIndex : updates.length - 1;
   const firstIssueS = updates[issued ? issueIndex : 0].issueS;
   const last = updates.length - 1;
 
-  const predicted = (u: number, distanceKm: number, vs30Ms: number, trueIntensity: number) =>
-    usesTrueMagnitude[u] ? trueIntensity : scale.fromLog10Pgv(motions[u].log10PgvCms(distanceKm, vs30Ms));
+  const predicted = (u: number, place: PlaceContext) => {
+    if (usesPlaceIntensity[u]) return place.intensity;
+    const source = updateSources[u];
+    let distanceKm = place.modelDistanceKm;
+    if (source) {
+      source.measure(place.epicentralKm, place.eastKm, place.northKm, distances);
+      distanceKm = distanceKind === "rupture" ? distances.ruptureKm : distances.joynerBooreKm;
+    }
+    return scale.fromLog10Pgv(motions[u].log10PgvCms(distanceKm, place.vs30Ms));
+  };
 
   const evaluator: PlaceAlertEvaluator = {
-    evaluate(_index, _lon, _lat, distanceKm, vs30Ms, trueIntensity, out: PlaceAlert) {
+    evaluate(_index, place, out: PlaceAlert) {
       out.issueS = firstIssueS;
+      out.updateIndex = -1;
       if (!issued) {
         out.alerted = false;
-        out.predictedIntensity = predicted(decidingIndex, distanceKm, vs30Ms, trueIntensity);
+        out.predictedIntensity = predicted(decidingIndex, place);
         out.alertMagnitude = updates[decidingIndex].mw;
         return;
       }
-      const atLast = predicted(last, distanceKm, vs30Ms, trueIntensity);
+      const atLast = predicted(last, place);
       if (atLast < areaAt) {
         out.alerted = false;
         out.predictedIntensity = atLast;
@@ -59,13 +76,14 @@ export function sourceStrategy(inputs: SourceStrategyInputs): AlertStrategy {
       let valueAtHi = atLast;
       while (lo < hi) {
         const mid = (lo + hi) >> 1;
-        const value = predicted(mid, distanceKm, vs30Ms, trueIntensity);
+        const value = predicted(mid, place);
         if (value >= areaAt) {
           hi = mid;
           valueAtHi = value;
         } else lo = mid + 1;
       }
       out.alerted = true;
+      out.updateIndex = hi;
       out.issueS = updates[hi].issueS;
       out.predictedIntensity = valueAtHi;
       out.alertMagnitude = updates[hi].mw;
@@ -86,6 +104,7 @@ export function sourceStrategy(inputs: SourceStrategyInputs): AlertStrategy {
     firstIssueS,
     peakPredictedIntensity: peaks[decidingIndex],
     updates,
+    firstUpdateIndex: issueIndex,
     notes,
     forPoints: () => evaluator,
     forGrid: () => evaluator,
