@@ -8,7 +8,7 @@ import type { BenchFigure } from "./section";
 
 function formatFigure(f: BenchFigure): string {
   const ratio = f.baselineMs ? `  ×${(f.ms / f.baselineMs).toFixed(1)} baseline` : "";
-  const target = f.targetMs ? (f.ms <= f.targetMs ? `  (target < ${f.targetMs} ms: met)` : `  (target < ${f.targetMs} ms: NOT met)`) : "";
+  const target = f.targetMs ? (f.ms <= f.targetMs ? `  (target < ${f.targetMs.toFixed(0)} ms: met)` : `  (target < ${f.targetMs.toFixed(0)} ms: NOT met)`) : "";
   return `  ${f.label.padEnd(64)} ${f.ms.toFixed(0).padStart(7)} ms${ratio}${target}${f.note ? `  — ${f.note}` : ""}`;
 }
 

@@ -2,6 +2,7 @@ import { cliSection } from "./sections/cli";
 import { contoursSection } from "./sections/contours";
 import { engineGridSection } from "./sections/engine-grid";
 import { exposureSection } from "./sections/exposure";
+import { ruptureAndWavefieldSection } from "./sections/rupture-and-wavefield";
 import { layersSection } from "./sections/layers";
 import type { BenchSection } from "./section";
 
@@ -10,6 +11,7 @@ export const SECTIONS: BenchSection[] = [
   engineGridSection,
   contoursSection,
   exposureSection,
+  ruptureAndWavefieldSection,
   cliSection,
   layersSection,
 ];
