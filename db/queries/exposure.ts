@@ -89,14 +89,15 @@ export async function readCachedResult({ key, db }: { key: string; db?: Database
 }
 
 /**
- * Stores a result under its key and, in the same transaction, drops the scenario version's other
- * results whose key starts with `replaces` (results of the same kind made from layers or settings
- * that are no longer the current ones).
+ * Stores a result under its key and drops the scenario version's other results whose key starts
+ * with `replaces` (results of the same kind made from layers or settings that are no longer the
+ * current ones). One batch, which libSQL runs as one transaction on the client's own connection,
+ * so concurrent requests storing results queue instead of failing with SQLITE_BUSY.
  */
 export async function storeCachedResult({ key, replaces, scenarioVersionId, result, db }: { key: string; replaces: string; scenarioVersionId: number; result: unknown; db?: Database }) {
   const database = await resolveDb(db);
-  await database.transaction(async (tx) => {
-    await tx.delete(resultCache).where(and(eq(resultCache.scenarioVersionId, scenarioVersionId), like(resultCache.key, `${replaces}%`), ne(resultCache.key, key)));
-    await tx.insert(resultCache).values({ key, scenarioVersionId, result }).onConflictDoUpdate({ target: resultCache.key, set: { result } });
-  });
+  await database.batch([
+    database.delete(resultCache).where(and(eq(resultCache.scenarioVersionId, scenarioVersionId), like(resultCache.key, `${replaces}%`), ne(resultCache.key, key))),
+    database.insert(resultCache).values({ key, scenarioVersionId, result }).onConflictDoUpdate({ target: resultCache.key, set: { result } }),
+  ]);
 }

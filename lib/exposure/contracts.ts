@@ -210,3 +210,7 @@ export const comparisonSchema = z.object({
   gridCellKm: z.number(),
 });
 export type Comparison = z.infer<typeof comparisonSchema>;
+
+/** GET /api/compare answers with this. */
+export const comparisonResponseSchema = z.object({ caution: z.string(), cached: z.boolean(), comparison: comparisonSchema });
+export type ComparisonResponse = z.infer<typeof comparisonResponseSchema>;

@@ -20,7 +20,8 @@ import { LEEWAY_VERSION } from "@/lib/geo";
 import { parseScenario } from "@/lib/scenario/schema";
 import { resultCacheKey } from "./cache-key";
 import { computeExposureResult } from "./compute-exposure";
-import { exposureResultSchema, thresholdStudySchema, type ExposureResult, type ThresholdStudy, type VersionRef } from "./contracts";
+import { compareVersions } from "./compare-versions";
+import { comparisonSchema, exposureResultSchema, thresholdStudySchema, type Comparison, type ExposureResult, type ThresholdStudy, type VersionRef } from "./contracts";
 import { computeThresholdStudy } from "./threshold-study";
 import { withWorkspaceScale, type ExposureInputs, type WorkspaceExposureSettings } from "./inputs";
 
@@ -144,4 +145,47 @@ export async function thresholdStudyOf(version: LoadedVersion, { db, now = new D
     db,
   });
   return { study: value, cached: hit };
+}
+
+/** Names a version's population layer version, for the refusal message. */
+async function populationLabel(version: LoadedVersion, db: Database | undefined): Promise<string> {
+  const id = version.layerVersionIds.population;
+  if (id === undefined) return "no population layer";
+  const [described] = await describeLayerVersions({ ids: [id], db });
+  return described ? `population layer "${described.name}" version ${described.number}` : `population layer version id ${id}`;
+}
+
+/**
+ * Compares version B with version A. Refused (409, with the reason) unless both record the same
+ * population layer version: otherwise a change in people would pass for a change in warning.
+ */
+export async function comparisonOf(a: LoadedVersion, b: LoadedVersion, { db, now = new Date() }: { db?: Database; now?: Date } = {}): Promise<{ comparison: Comparison; cached: boolean }> {
+  const name = (v: LoadedVersion) => `"${v.ref.scenarioName}" version ${v.ref.versionNumber}`;
+  if (a.layerVersionIds.population === undefined || a.layerVersionIds.population !== b.layerVersionIds.population) {
+    const [labelA, labelB] = await Promise.all([populationLabel(a, db), populationLabel(b, db)]);
+    throw new LeewayError(
+      "conflict",
+      `These versions cannot be compared: ${name(a)} uses ${labelA} and ${name(b)} uses ${labelB}. A comparison needs both on the same population layer version, so that only the warning changes, not the people.`,
+    );
+  }
+  const settings = await readWorkspaceExposureSettings({ db });
+  const prefix = `compare:${b.row.id}:`;
+  const { value, cached: hit } = await cached({
+    key: resultCacheKey(prefix, { a: versionCacheKey("", a, settings), b: versionCacheKey("", b, settings) }),
+    replaces: prefix,
+    scenarioVersionId: a.row.id,
+    parse: (stored) => comparisonSchema.safeParse(stored).data,
+    compute: async () => {
+      const exposureA = await exposureOf(a, { db, now });
+      const exposureB = await exposureOf(b, { db, now });
+      const [inputsA, inputsB] = await Promise.all([loadInputs(a, settings, { db, now }), loadInputs(b, settings, { db, now })]);
+      return compareVersions(
+        { ref: a.ref, inputs: inputsA, exposure: exposureA.exposure },
+        { ref: b.ref, inputs: inputsB, exposure: exposureB.exposure },
+        now.toISOString(),
+      );
+    },
+    db,
+  });
+  return { comparison: value, cached: hit };
 }

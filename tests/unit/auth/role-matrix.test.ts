@@ -41,7 +41,8 @@ async function callRoute(endpoint: Endpoint, testCase: RouteCase, caller: Caller
   const body = testCase.body?.(fixture);
   app.signInAs(caller);
   const loaded = (await import(path.join(ROOT, endpoint.file))) as Record<string, AnyHandler>;
-  const url = `http://leeway.test${fillPath(routePathOf(endpoint.file), params)}${testCase.query ?? ""}`;
+  const query = typeof testCase.query === "function" ? testCase.query(params) : (testCase.query ?? "");
+  const url = `http://leeway.test${fillPath(routePathOf(endpoint.file), params)}${query}`;
   const request = new Request(url, { method: endpoint.exportName, body: body === undefined ? undefined : JSON.stringify(body) });
   const response = await loaded[endpoint.exportName](request, { params: Promise.resolve(params) });
   return response.status;

@@ -9,14 +9,15 @@ import { app, type Fixture } from "../support/app";
 import { issueAuthToken } from "@/db/queries/tokens";
 import { scenarios, scenarioVersions, users } from "@/db/schema";
 import { everyone, fromBrief, signedIn, type Expectation } from "./brief-roles";
-import { computableVersion } from "../exposure/fixture";
+import { comparableVersions, computableVersion } from "../exposure/fixture";
 
 export interface RouteCase {
   /** Shown in the test name when a row has several cases. */
   name?: string;
   /** Route params; may write rows first (runs after the fixture is reset, before signing in). */
   params?: (fixture: Fixture) => Record<string, string | number> | Promise<Record<string, string | number>>;
-  query?: string;
+  /** A query string, or one made from the case's params (for ids the fixture writes first). */
+  query?: string | ((params: Record<string, string>) => string);
   body?: (fixture: Fixture) => unknown;
   expect: Expectation;
 }
@@ -96,6 +97,17 @@ const exposureCases = (query?: string): RouteCase[] => [
   { name: "published", params: () => computableVersion("published"), query, expect: fromBrief("see published scenarios, their exposure and council view", 200) },
 ];
 
+/** Comparisons of two versions in one state; the versions' ids go in the query. */
+const compareCases = (table = ""): RouteCase[] => [
+  { name: "draft versions", params: () => comparableVersions("draft"), query: (p) => `?a=${p.a}&b=${p.b}${table}`, expect: fromBrief("see draft scenarios", 200, { trainer: 403 }) },
+  {
+    name: "published versions",
+    params: () => comparableVersions("published"),
+    query: (p) => `?a=${p.a}&b=${p.b}${table}`,
+    expect: fromBrief("see published scenarios, their exposure and council view", 200),
+  },
+];
+
 const versionParams = (number: keyof Fixture["versions"]) => (fixture: Fixture) => ({ scenarioId: fixture.scenarioId, number: fixture.versions[number] });
 
 export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
@@ -153,6 +165,14 @@ export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
   "GET /api/scenarios/[scenarioId]/versions/[number]/exposure/csv": { cases: exposureCases("?table=class-band") },
   "GET /api/scenarios/[scenarioId]/versions/[number]/threshold-study": { cases: exposureCases() },
   "GET /api/scenarios/[scenarioId]/versions/[number]/threshold-study/csv": { cases: exposureCases() },
+  "GET /api/compare": { cases: compareCases() },
+  "GET /api/compare/csv": { cases: compareCases("&table=transitions") },
+  "GET /api/compare/seconds-gained": {
+    cases: [
+      { name: "draft versions", params: () => comparableVersions("draft"), query: (p) => `?a=${p.a}&b=${p.b}`, expect: fromBrief(EXPORT_FILES, 200, { trainer: 403 }) },
+      { name: "published versions", params: () => comparableVersions("published"), query: (p) => `?a=${p.a}&b=${p.b}`, expect: fromBrief(EXPORT_FILES, 200) },
+    ],
+  },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/cap": { cases: fileExportCases("?exercise=Matrix%20drill") },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/contours": { cases: fileExportCases() },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/sites": { cases: fileExportCases("?point=150.2,-30.0") },

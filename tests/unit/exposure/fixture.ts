@@ -77,3 +77,14 @@ export async function computableVersion(state: ScenarioState): Promise<{ scenari
   const { scenarioId } = await insertScenario(`Computable ${state}`, [{ params: homogeneousScenario(), layerVersions: { population: population.layerVersionId }, state }]);
   return { scenarioId, number: 1 };
 }
+
+/** One scenario with two computable versions in `state` on the same population layer version; the compare routes' `a` and `b`. */
+export async function comparableVersions(state: ScenarioState): Promise<{ a: string; b: string }> {
+  const population = await insertPopulationVersion({ ...cellsEast([20, 60]), people: [1200, 800] });
+  const layerVersions = { population: population.layerVersionId };
+  const { scenarioId } = await insertScenario(`Comparable ${state}`, [
+    { params: homogeneousScenario(), layerVersions, state },
+    { params: homogeneousScenario({ stationKm: [5, 10, 30] }), layerVersions, state },
+  ]);
+  return { a: `${scenarioId}:1`, b: `${scenarioId}:2` };
+}
