@@ -177,6 +177,7 @@ export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/contours": { cases: fileExportCases() },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/sites": { cases: fileExportCases("?point=150.2,-30.0") },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/scenario-file": { cases: fileExportCases() },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/exports/handout": { cases: fileExportCases("?lon=150.4&lat=-30.0&name=Matrix%20school") },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/exposure": {
     cases: [
       // Council may download exposure CSV, but only of versions they may see (published).

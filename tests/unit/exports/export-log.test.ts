@@ -95,9 +95,11 @@ describe("the export log", () => {
   });
 
   it("refuses a stored version that is not a valid scenario file (409), naming the field", async () => {
+    // A partial file: no site conditions and no area.
+    const { vs30: _vs30, area: _area, ...partial } = SCENARIO_FILE;
+    await addVersion(fixture, partial);
     app.signInAs("planner");
-    // The fixture's own versions hold a partial file (no vs30, no area).
-    const response = await getExport("contours", fixture.scenarioId, fixture.versions.draft);
+    const response = await getExport("contours", fixture.scenarioId, 4);
     expect(response.status).toBe(409);
     expect((await response.json()).error.message).toMatch(/vs30/);
     expect(await app.count("export_log")).toBe(0);
