@@ -1,7 +1,8 @@
 /**
  * `npm run bench [-- section-id …]`: runs every benchmark section (or the named ones) on one
  * core and prints each figure, its ratio to the section's baseline and whether it meets its
- * target. Figures are medians of a few runs; they are measurements, not tests.
+ * target. Figures are the fastest of a few runs (the least disturbed on a shared machine); they
+ * are measurements, not tests.
  */
 import { SECTIONS } from "./sections";
 import type { BenchFigure } from "./section";

@@ -16,17 +16,19 @@ export interface BenchSection {
   run(): Promise<BenchFigure[]> | BenchFigure[];
 }
 
-/** Median wall time (ms) of `runs` calls after `warmups` unmeasured ones. */
-export function measureMs(fn: () => unknown, runs = 3, warmups = 1): number {
+/**
+ * Fastest wall time (ms) of `runs` calls after `warmups` unmeasured ones. The fastest run is the
+ * one least disturbed by other work on a shared machine, so it best estimates one core's speed.
+ */
+export function fastestMs(fn: () => unknown, runs = 5, warmups = 1): number {
   for (let i = 0; i < warmups; i++) fn();
-  const times: number[] = [];
+  let fastest = Infinity;
   for (let i = 0; i < runs; i++) {
     const start = performance.now();
     fn();
-    times.push(performance.now() - start);
+    fastest = Math.min(fastest, performance.now() - start);
   }
-  times.sort((a, b) => a - b);
-  return times[Math.floor(times.length / 2)];
+  return fastest;
 }
 
 /** Bytes held by typed arrays and other off-heap buffers, plus the JS heap, in MB. */
