@@ -57,7 +57,7 @@ export async function describeLayerVersions({ ids, db }: { ids: number[]; db?: D
   if (ids.length === 0) return [];
   const database = await resolveDb(db);
   return database
-    .select({ id: layerVersions.id, number: layerVersions.number, kind: layers.kind, name: layers.name })
+    .select({ id: layerVersions.id, layerId: layerVersions.layerId, number: layerVersions.number, kind: layers.kind, name: layers.name })
     .from(layerVersions)
     .innerJoin(layers, eq(layers.id, layerVersions.layerId))
     .where(inArray(layerVersions.id, ids));
@@ -78,7 +78,8 @@ export async function readDistrictOutlines({ layerVersionId, db }: { layerVersio
     .from(districts)
     .where(eq(districts.layerVersionId, layerVersionId))
     .orderBy(asc(districts.idx));
-  return rows as { idx: number; name: string; geometry: { type: "Polygon" | "MultiPolygon"; coordinates: unknown } }[];
+  // Stored after the layer reader checked them as GeoJSON polygons (lib/layers/geometry-checks.ts).
+  return rows as { idx: number; name: string; geometry: { type: "Polygon"; coordinates: number[][][] } | { type: "MultiPolygon"; coordinates: number[][][][] } }[];
 }
 
 /** A cached result by key, or undefined. */
