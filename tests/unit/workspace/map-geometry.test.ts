@@ -1,6 +1,7 @@
 import { Geodesic } from "geographiclib-geodesic";
 import { describe, expect, it } from "vitest";
 import { dragRuptureEnd, ruptureTraceEnds } from "@/lib/workspace/rupture-trace";
+import { populationDensitySquares } from "@/lib/workspace/population-density";
 import { PREVIEW_MIN_CELLS_PER_SIDE, previewGrid } from "@/lib/workspace/preview-area";
 
 /** Distance (km) and azimuth (°) by GeographicLib, the reference for every check here. */
@@ -62,5 +63,26 @@ describe("preview grid", () => {
   it("covers only the part of the view inside the area, and the whole area when none of it is in view", () => {
     expect(previewGrid([-130, -50, -126, -46], area).bbox).toEqual([-128.6, -49, -126, -46]);
     expect(previewGrid([0, 0, 1, 1], area).bbox).toEqual(area);
+  });
+});
+
+describe("population density squares", () => {
+  const bbox: [number, number, number, number] = [-127, -47.5, -125.5, -46.5];
+  const points = [
+    { lon: -126.5, lat: -47.0, people: 1200 },
+    { lon: -126.501, lat: -47.001, people: 800 },
+    { lon: -125.6, lat: -46.6, people: 50 },
+  ];
+
+  it("keeps every person and gives people per km² of each square", () => {
+    const squares = populationDensitySquares(points, bbox, 8);
+    const total = squares.features.reduce((sum, f) => sum + f.properties.people, 0);
+    expect(total).toBe(2050);
+    const dense = squares.features.find((f) => f.properties.people === 2000)!;
+    // Area of the square by GeographicLib's polygon area on WGS84 (an outside check of cellAreaKm2).
+    const polygon = Geodesic.WGS84.Polygon(false);
+    for (const [lon, lat] of dense.geometry.coordinates[0].slice(0, 4)) polygon.AddPoint(lat, lon);
+    const areaKm2 = Math.abs(polygon.Compute(false, true).area ?? NaN) / 1e6;
+    expect(dense.properties.perKm2).toBeCloseTo(2000 / areaKm2, 0);
   });
 });
