@@ -2,27 +2,26 @@ import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { z } from "zod";
 import { db } from "@/db/client";
-import { layers, layerVersions, scenarios, scenarioVersions, type ScenarioRow, type ScenarioVersionRow } from "@/db/schema";
+import { layerVersions, scenarios, scenarioVersions, type ScenarioRow, type ScenarioVersionRow } from "@/db/schema";
 import { recordAudit, type Executor } from "@/lib/audit/record";
 import { LeewayError } from "@/lib/errors";
-import { computeHeadline, headlineChanges, headlineSchema, type Headline, type HeadlineLayer } from "@/lib/publishing/headline";
+import { computeHeadline, headlineSchema, type Headline, type HeadlineExposure } from "@/lib/publishing/headline";
 import { nextVisibilityState, type VisibilityAction } from "@/lib/publishing/state";
 
 /** `scenario_versions.layer_versions`: layer kind → layer version id. */
 const layerVersionIdsSchema = z.record(z.string(), z.number().int());
 
-/** The layer versions a scenario version records, with their layer's name and kind. */
-async function loadHeadlineLayers(tx: Executor, layerVersionIds: unknown): Promise<HeadlineLayer[]> {
+/** Layer kind → layer version number, for the provenance line. */
+async function layerVersionNumbers(executor: Executor, layerVersionIds: unknown): Promise<Record<string, number>> {
   const parsed = layerVersionIdsSchema.safeParse(layerVersionIds);
-  const ids = parsed.success ? Object.values(parsed.data) : [];
-  if (ids.length === 0) return [];
-  const rows = await tx
-    .select({ kind: layers.kind, name: layers.name, version: layerVersions.number, summary: layerVersions.summary })
+  const ids = parsed.success ? parsed.data : {};
+  if (Object.keys(ids).length === 0) return {};
+  const rows = await executor
+    .select({ id: layerVersions.id, number: layerVersions.number })
     .from(layerVersions)
-    .innerJoin(layers, eq(layers.id, layerVersions.layerId))
-    .where(inArray(layerVersions.id, ids))
-    .orderBy(layers.kind);
-  return rows;
+    .where(inArray(layerVersions.id, Object.values(ids)));
+  const numberOf = new Map(rows.map((row) => [row.id, row.number]));
+  return Object.fromEntries(Object.entries(ids).flatMap(([kind, id]) => (numberOf.has(id) ? [[kind, numberOf.get(id)!]] : [])));
 }
 
 export interface VisibilityChange {
@@ -35,8 +34,9 @@ export interface VisibilityChange {
 
 /**
  * Publishes, unpublishes, shares or unshares a scenario version in one transaction with its audit
- * row. Publishing freezes the headline figures and the publisher; the version's scenario file and
- * layer versions are never changed here. `note` is the publication note (publish) or the reason
+ * row. Publishing freezes the headline figures (from `exposure`, computed by the caller before the
+ * transaction because it takes a while) and the publisher; the version's scenario file and layer
+ * versions are never changed here. `note` is the publication note (publish) or the reason
  * (unpublish), kept in the audit trail either way.
  */
 export async function changeVersionVisibility({
@@ -45,12 +45,15 @@ export async function changeVersionVisibility({
   number,
   action,
   note,
+  exposure,
 }: {
   actorId: number;
   scenarioId: number;
   number: number;
   action: VisibilityAction;
   note?: string;
+  /** Required to publish. */
+  exposure?: HeadlineExposure;
 }): Promise<VisibilityChange> {
   return db.transaction(async (tx) => {
     const [row] = await tx
@@ -67,13 +70,14 @@ export async function changeVersionVisibility({
     let headline: Headline | null = null;
     const changes: Partial<ScenarioVersionRow> = { state: next.state };
     if (action === "publish") {
+      if (!exposure) throw new Error("Publishing needs the version's exposure figures (exposureForHeadline).");
       const now = new Date();
       headline = computeHeadline({
-        scenarioName: scenario.name,
         versionNumber: version.number,
         params: version.params,
-        layers: await loadHeadlineLayers(tx, version.layerVersions),
+        layerVersions: await layerVersionNumbers(tx, version.layerVersions),
         computedAt: now,
+        exposure,
       });
       Object.assign(changes, { note: note ?? "", publishedAt: now, publishedBy: actorId, headline });
     }
@@ -93,26 +97,18 @@ export async function changeVersionVisibility({
   });
 }
 
-/**
- * For the council summary: the headline frozen at publication beside the one Leeway computes today
- * from the same scenario file and layer versions, and the figures that differ (an engine or model
- * change since publication). `stored` is null for a version that was never published.
- */
-export async function compareHeadlineWithToday({ scenarioId, number }: { scenarioId: number; number: number }) {
-  const [row] = await db
-    .select({ scenario: scenarios, version: scenarioVersions })
+/** What a headline is computed from: a version's scenario file and layer version numbers, and the headline stored at publication. */
+export async function findHeadlineSource({ scenarioId, number }: { scenarioId: number; number: number }) {
+  const [version] = await db
+    .select()
     .from(scenarioVersions)
-    .innerJoin(scenarios, eq(scenarios.id, scenarioVersions.scenarioId))
     .where(and(eq(scenarioVersions.scenarioId, scenarioId), eq(scenarioVersions.number, number)));
-  if (!row) throw new LeewayError("not-found", `There is no version ${number} of scenario ${scenarioId}.`);
-  const parsed = headlineSchema.safeParse(row.version.headline);
-  const stored = parsed.success ? parsed.data : null;
-  const today = computeHeadline({
-    scenarioName: row.scenario.name,
-    versionNumber: row.version.number,
-    params: row.version.params,
-    layers: await loadHeadlineLayers(db, row.version.layerVersions),
-    computedAt: new Date(),
-  });
-  return { stored, today, changes: stored ? headlineChanges(stored, today) : [] };
+  if (!version) throw new LeewayError("not-found", `There is no version ${number} of scenario ${scenarioId}.`);
+  const stored = headlineSchema.safeParse(version.headline);
+  return {
+    number: version.number,
+    params: version.params,
+    layerVersions: await layerVersionNumbers(db, version.layerVersions),
+    stored: stored.success ? stored.data : null,
+  };
 }

@@ -1,5 +1,5 @@
 import { CAUTION } from "@/lib/caution";
-import { formatFigure, formatProvenance, type Headline } from "@/lib/publishing/headline";
+import { formatFigure, type Headline } from "@/lib/publishing/headline";
 import type { MailMessage } from "./transport";
 
 /** `2025-03-04 09:30 UTC`: e-mails are read in any time zone. */
@@ -72,13 +72,14 @@ export function publicationMessage(input: {
       ...(input.note ? [`Note: ${input.note}`, ""] : []),
       "Headline figures:",
       ...figures,
+      ...(input.headline.exposureNote ? [`  Exposure figures are not included: ${input.headline.exposureNote}`] : []),
       "",
       "Read the council summary:",
       input.summaryLink,
       "",
       `Caution: ${CAUTION}`,
       "",
-      `How it was made: ${formatProvenance(input.headline.provenance)}`,
+      `How it was made: ${input.headline.provenance}`,
     ].join("\n"),
   };
 }

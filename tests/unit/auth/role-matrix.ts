@@ -6,6 +6,7 @@
 // Adding a row: copy the key the failure prints, say which brief row governs it (fromBrief) or
 // that any signed-in person may (signedIn), and give the request that should succeed.
 import { app, type Fixture } from "../support/app";
+import { makeFixtureComputable } from "../support/computable-scenario";
 import { issueAuthToken } from "@/db/queries/tokens";
 import { scenarios, scenarioVersions, users } from "@/db/schema";
 import { everyone, fromBrief, signedIn, type Expectation } from "./brief-roles";
@@ -150,7 +151,7 @@ export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
     ],
   },
   "POST /api/scenarios/[scenarioId]/versions/[number]/publish": {
-    cases: [{ params: versionParams("draft"), body: () => ({ note: "Matrix" }), expect: fromBrief("publish / unpublish to council (e-mails council members)", 200) }],
+    cases: [{ params: async (f) => (await makeFixtureComputable(f), versionParams("draft")(f)), body: () => ({ note: "Matrix" }), expect: fromBrief("publish / unpublish to council (e-mails council members)", 200) }],
   },
   "DELETE /api/scenarios/[scenarioId]/versions/[number]/publish": {
     cases: [{ params: versionParams("published"), body: () => ({ reason: "Matrix" }), expect: fromBrief("publish / unpublish to council (e-mails council members)", 200) }],

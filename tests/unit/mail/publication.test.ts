@@ -1,17 +1,19 @@
 import { app } from "../support/app";
+import { EPICENTRE_CELL_PEOPLE, makeFixtureComputable } from "../support/computable-scenario";
 import { and, eq } from "drizzle-orm";
 import { beforeAll, beforeEach, describe, expect, it } from "vitest";
 import { DELETE as unpublish, POST as publish } from "@/app/api/scenarios/[scenarioId]/versions/[number]/publish/route";
 import { DELETE as unshare, POST as share } from "@/app/api/scenarios/[scenarioId]/versions/[number]/share/route";
-import { compareHeadlineWithToday } from "@/db/queries/publishing";
-import { auditLog, layerVersions, scenarioVersions, users } from "@/db/schema";
+import { auditLog, scenarioVersions, users } from "@/db/schema";
 import { CAUTION } from "@/lib/caution";
 import { headlineSchema } from "@/lib/publishing/headline";
+import { compareHeadlineWithToday } from "@/lib/publishing/headline-today";
 import { isVersionFrozen } from "@/lib/publishing/state";
 import packageJson from "@/package.json";
 
 beforeAll(() => app.startMailServer());
-beforeEach(() => app.reset());
+
+beforeEach(async () => makeFixtureComputable(await app.reset()));
 
 type Handler = (request: Request, context: { params: Promise<{ scenarioId: string; number: string }> }) => Promise<Response>;
 
@@ -50,7 +52,16 @@ describe("publishing to council", () => {
     // The layer versions the version used are left as they were.
     expect(published.layerVersions).toEqual({ population: app.fixture.populationLayerVersionId });
     const headline = headlineSchema.parse(published.headline);
-    expect(headline.figures.find((figure) => figure.key === "layerPopulation")?.value).toBe(12_345);
+    // The fixture's only population cell (1,000 people) lies on the epicentre. There the S wave
+    // arrives after 20 km / 3.36 km/s ≈ 6.0 s (IASP91 upper crust; from memory), while the alert
+    // waits for the second station's P wave (both operating stations ≈ 19 km away: ≈ 28 km
+    // hypocentral, ≈ 4.8 s at 5.8 km/s) plus the default P window, telemetry and processing
+    // (1 + 0.5 + 1.5 s) and cell-broadcast delivery (5 s): ≈ 12.8 s. Warning ≈ −7 s, so the cell is
+    // in the blind zone and nobody gets 10 s (hand estimate; the margin is several seconds).
+    const figure = (key: string) => headline.figures.find((f) => f.key === key)?.value;
+    expect(figure("blindZonePeople")).toBe(EPICENTRE_CELL_PEOPLE);
+    expect(figure("alertedTenSecondsPeople")).toBe(0);
+    expect(headline.exposureNote).toBeNull();
 
     const mails = await app.waitForMail(2);
     const text = mails[0].text;
@@ -58,16 +69,43 @@ describe("publishing to council", () => {
     expect(text).toContain(`http://leeway.test/scenarios/${app.fixture.scenarioId}/council?v=1`);
     expect(text).toContain("Note: For the March briefing");
     expect(text).toContain("Magnitude (Mw): 7.1");
+    // Stations S1 and S2 operate, S3 does not (the fixture's scenario file).
     expect(text).toContain("Operating stations: 2");
-    expect(text).toContain("People in the population layer: 12,345 people");
+    expect(text).toContain("People in the blind zone (shaking before any alert): 1,000 people");
     // The caution word for word, and the "how it was made" line (BRIEF "Cautions and provenance").
     expect(text.replace(/\s+/g, " ")).toContain(CAUTION);
-    expect(text).toMatch(new RegExp(`How it was made: Leeway ${packageJson.version.replace(/\./g, "\\.")} · ground motion: Si & Midorikawa \\(1999\\)`));
-    expect(text).toContain('scenario "Harbour test" version 1');
-    expect(text).toContain('layers: population "Fixture population" v1');
+    const provenance = text.split("\n").find((line) => line.startsWith("How it was made: "));
+    expect(provenance).toContain(`Leeway ${packageJson.version}`);
+    expect(provenance).toContain("ground motion: Si & Midorikawa (1999)");
+    expect(provenance).toContain("scenario: Harbour test v1");
+    expect(provenance).toContain("layers: population v1");
+    expect(provenance).toMatch(/computed \d{4}-\d{2}-\d{2}T/);
 
     const [audit] = await app.db.select().from(auditLog);
     expect(audit).toMatchObject({ action: "publish", targetType: "scenario-version", targetId: `${app.fixture.scenarioId}/1` });
+  });
+
+  it("publishes a version without a population layer with its source figures, saying why exposure is missing", async () => {
+    await app.db.update(scenarioVersions).set({ layerVersions: {} }).where(eq(scenarioVersions.scenarioId, app.fixture.scenarioId));
+    app.signInAs("planner");
+    expect((await call(publish, "POST", 1, { note: "Source only" })).status).toBe(200);
+    const headline = headlineSchema.parse((await version(1)).headline);
+    expect(headline.figures.map((f) => f.key)).toEqual(["mw", "depthKm", "faultType", "operatingStations", "triggerStations"]);
+    expect(headline.exposureNote).toContain("no population layer");
+    expect(headline.provenance).toContain("scenario: Harbour test v1");
+    const [mail] = await app.waitForMail(1);
+    expect(mail.text).toContain("Exposure figures are not included:");
+    expect(mail.text).toContain("How it was made: Leeway");
+  });
+
+  it("refuses a version whose scenario file the engine cannot read (409) and changes nothing", async () => {
+    await app.db.update(scenarioVersions).set({ params: { version: 1 } }).where(eq(scenarioVersions.scenarioId, app.fixture.scenarioId));
+    app.signInAs("planner");
+    const response = await call(publish, "POST", 1, { note: "Broken" });
+    expect(response.status).toBe(409);
+    expect((await response.json()).error.message).toContain("scenario file Leeway cannot compute");
+    expect((await version(1)).state).toBe("draft");
+    expect(await app.count("outbox")).toBe(0);
   });
 
   it("refuses a missing note by name and changes nothing", async () => {
@@ -132,9 +170,11 @@ describe("the council summary's check against today's figures", () => {
     expect(fresh.stored).not.toBeNull();
     expect(fresh.changes).toEqual([]);
 
-    // The layer version's figures are corrected after publication.
-    await app.db.update(layerVersions).set({ summary: { totalPopulation: 12_400 } }).where(eq(layerVersions.id, app.fixture.populationLayerVersionId));
+    // A changed stored figure stands for one computed differently at publication (an older engine).
+    const stored = headlineSchema.parse((await version(1)).headline);
+    const older = { ...stored, figures: stored.figures.map((f) => (f.key === "blindZonePeople" ? { ...f, value: 900 } : f)) };
+    await app.db.update(scenarioVersions).set({ headline: older }).where(and(eq(scenarioVersions.scenarioId, app.fixture.scenarioId), eq(scenarioVersions.number, 1)));
     const later = await compareHeadlineWithToday({ scenarioId: app.fixture.scenarioId, number: 1 });
-    expect(later.changes).toEqual([{ key: "layerPopulation", label: "People in the population layer", stored: 12_345, now: 12_400 }]);
+    expect(later.changes).toEqual([{ key: "blindZonePeople", label: "People in the blind zone (shaking before any alert)", stored: 900, now: 1_000 }]);
   });
 });

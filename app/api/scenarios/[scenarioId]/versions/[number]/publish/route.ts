@@ -3,6 +3,7 @@ import { parseJsonBody, parseWith, route } from "@/lib/api/handler";
 import { scenarioVersionParamsSchema } from "@/lib/api/params";
 import { requirePermission } from "@/lib/auth/session";
 import { publishBodySchema, unpublishBodySchema } from "@/lib/publishing/contracts";
+import { exposureForHeadline } from "@/lib/publishing/headline-today";
 import { notifyCouncil, toVisibilityResponse } from "@/lib/publishing/notify";
 
 type Context = { params: Promise<{ scenarioId: string; number: string }> };
@@ -12,7 +13,8 @@ export const POST = route(async (request, context: Context) => {
   const { scenarioId, number } = parseWith(scenarioVersionParamsSchema, await context.params, "Scenario version address");
   const user = await requirePermission("scenario:publish");
   const { note } = await parseJsonBody(request, publishBodySchema);
-  const change = await changeVersionVisibility({ actorId: user.id, scenarioId, number, action: "publish", note });
+  const exposure = await exposureForHeadline({ scenarioId, number });
+  const change = await changeVersionVisibility({ actorId: user.id, scenarioId, number, action: "publish", note, exposure });
   const mail = await notifyCouncil(change, { actorName: user.name, note });
   return Response.json(toVisibilityResponse(change, mail));
 });
