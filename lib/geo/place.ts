@@ -70,8 +70,8 @@ export function evaluateShaking(engine: ShakingEngine, epicentralKm: number, eas
   out.epicentralKm = epicentralKm;
   out.eastKm = eastKm;
   out.northKm = northKm;
-  out.pArrivalS = engine.pTable.timeS(epicentralKm, depthKm);
-  out.sArrivalS = engine.sTable.timeS(epicentralKm, depthKm);
+  out.pArrivalS = engine.pTable.timeFromHypocentralS(out.hypocentralKm, depthKm);
+  out.sArrivalS = engine.sTable.timeFromHypocentralS(out.hypocentralKm, depthKm);
   out.peakShakingS = engine.source.kind === "point" ? out.sArrivalS : peakShakingS(engine, out);
   out.sIsHeadWave = epicentralKm >= engine.sHeadWaveFromKm;
   out.modelDistanceKm = engine.model.distanceKind === "rupture" ? out.ruptureKm : out.joynerBooreKm;

@@ -69,9 +69,18 @@ export function siMidorikawaLog10Pgv600(earthquake: ModelEarthquake, distanceKm:
 function prepare(earthquake: ModelEarthquake): PreparedGroundMotion {
   const c = SI_MIDORIKAWA_1999;
   const k = constants(earthquake);
+  // Neighbouring places mostly share a Vs30: keep the last amplification.
+  let lastVs30Ms = Number.NaN;
+  let lastLog10Arv = 0;
+  const log10Arv = (vs30Ms: number) => {
+    if (vs30Ms !== lastVs30Ms) {
+      lastVs30Ms = vs30Ms;
+      lastLog10Arv = log10AmplificationRatio(vs30Ms);
+    }
+    return lastLog10Arv;
+  };
   return {
-    log10PgvCms: (distanceKm, vs30Ms) =>
-      k.pgv - Math.log10(distanceKm + k.pgvNear) - c.pgv.anelastic * distanceKm + log10AmplificationRatio(vs30Ms),
+    log10PgvCms: (distanceKm, vs30Ms) => k.pgv - Math.log10(distanceKm + k.pgvNear) - c.pgv.anelastic * distanceKm + log10Arv(vs30Ms),
     log10PgaCms2: (distanceKm) => k.pga - Math.log10(distanceKm + k.pgaNear) - c.pga.anelastic * distanceKm,
     sigmaLog10Pgv: () => c.sigmaLog10.pgv,
     dataLimitKm: siMidorikawaDataLimitKm(earthquake.mw),

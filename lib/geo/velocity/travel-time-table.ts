@@ -28,6 +28,8 @@ export interface TravelTimeTable {
   maxDistanceKm: number;
   /** Travel time (s) to a surface point `epicentralKm` from a source at `depthKm`. */
   timeS(epicentralKm: number, depthKm: number): number;
+  /** The same from the straight-line distance `hypocentralKm` = √(x² + h²), which callers often have already. */
+  timeFromHypocentralS(hypocentralKm: number, depthKm: number): number;
 }
 
 /** Builds the table by the exact ray calculation at every node. */
@@ -50,27 +52,31 @@ export function buildTravelTimeTable(model: VelocityModel, phase: Phase, options
   }
   const lastDistance = distanceCount - 2;
   const lastDepth = Math.max(0, depthCount - 2);
+  /** Bilinear interpolation at hypocentral distance `r` (within the table) and `depthKm`. */
+  const interpolate = (r: number, depthKm: number): number => {
+    const fr = r / stepR;
+    const i = Math.min(lastDistance, Math.floor(fr));
+    const wr = fr - i;
+    if (depthCount === 1) return values[i] + wr * (values[i + 1] - values[i]);
+    const fd = Math.min(depthCount - 1, Math.max(0, (depthKm - depthMin) / stepD));
+    const j = Math.min(lastDepth, Math.floor(fd));
+    const wd = fd - j;
+    const a = j * distanceCount + i;
+    const b = a + distanceCount;
+    const near = values[a] + wr * (values[a + 1] - values[a]);
+    const far = values[b] + wr * (values[b + 1] - values[b]);
+    return near + wd * (far - near);
+  };
   return {
     phase,
     model,
     maxDistanceKm,
     timeS(epicentralKm, depthKm) {
       const r = Math.sqrt(epicentralKm * epicentralKm + depthKm * depthKm);
-      if (r > maxDistanceKm) return firstArrivalS(model, phase, epicentralKm, depthKm);
-      const fr = r / stepR;
-      const i = Math.min(lastDistance, Math.floor(fr));
-      const wr = fr - i;
-      if (depthCount === 1) {
-        return values[i] + wr * (values[i + 1] - values[i]);
-      }
-      const fd = Math.min(depthCount - 1, Math.max(0, (depthKm - depthMin) / stepD));
-      const j = Math.min(lastDepth, Math.floor(fd));
-      const wd = fd - j;
-      const a = j * distanceCount + i;
-      const b = a + distanceCount;
-      const near = values[a] + wr * (values[a + 1] - values[a]);
-      const far = values[b] + wr * (values[b + 1] - values[b]);
-      return near + wd * (far - near);
+      return r > maxDistanceKm ? firstArrivalS(model, phase, epicentralKm, depthKm) : interpolate(r, depthKm);
+    },
+    timeFromHypocentralS(r, depthKm) {
+      return r > maxDistanceKm ? firstArrivalS(model, phase, Math.sqrt(Math.max(0, r * r - depthKm * depthKm)), depthKm) : interpolate(r, depthKm);
     },
   };
 }
