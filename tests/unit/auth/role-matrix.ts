@@ -79,6 +79,18 @@ async function exportableVersion(fixture: Fixture, state: "shared" | "published"
   return { scenarioId: fixture.scenarioId, number };
 }
 
+/** A map-sheet view as the browser sends it for a PNG sheet (lib/exports/map-sheet/sheet-request.ts). */
+const MATRIX_SHEET_VIEW = {
+  paper: "a4",
+  orientation: "landscape",
+  format: "png",
+  centre: [150.2, -30.1],
+  zoom: 8,
+  bounds: [149.4, -30.6, 151.0, -29.6],
+  legend: [],
+  overlays: { stations: true, sources: true },
+};
+
 const EXPORT_FILES = "map sheet, handout, GeoJSON, site CSV, scenario file, exercise CAP message" as const;
 const EXPOSURE_CSV = "print the council view; download exposure CSV" as const;
 
@@ -178,6 +190,10 @@ export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/contours": { cases: fileExportCases() },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/sites": { cases: fileExportCases("?point=150.2,-30.0") },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/scenario-file": { cases: fileExportCases() },
+  "POST /api/scenarios/[scenarioId]/versions/[number]/exports/map-sheet": {
+    // A PNG sheet needs no image on the server: the composed marks come back as JSON.
+    cases: fileExportCases().map((c) => ({ ...c, body: () => ({ view: MATRIX_SHEET_VIEW }) })),
+  },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/handout": { cases: fileExportCases("?lon=150.4&lat=-30.0&name=Matrix%20school") },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/exposure": {
     cases: [
