@@ -82,7 +82,9 @@ export function StackedBarChart({
         <ul className="flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink">
           {series.map((s) => (
             <li key={s.key} className="flex items-center gap-1.5">
-              <span aria-hidden="true" className="inline-block h-3 w-3 rounded-sm border border-line-strong" style={{ background: s.colour }} />
+              <svg aria-hidden="true" width="12" height="12">
+                <rect x="0.5" y="0.5" width="11" height="11" rx="2" fill={s.colour} className="stroke-line-strong" />
+              </svg>
               {s.label}
             </li>
           ))}

@@ -10,6 +10,7 @@ export interface NavItem {
 /** The workspace's sections, in the order they appear in the header. */
 export const NAV_ITEMS: NavItem[] = [
   { href: "/scenarios", label: "Scenarios" },
+  { href: "/compare", label: "Compare" },
   { href: "/layers", label: "Layers", permission: "layer:view" },
   { href: "/admin/people", label: "People", permission: "admin:people" },
   { href: "/admin/outbox", label: "Outbox", permission: "admin:people" },

@@ -96,5 +96,6 @@ export function compareVersions(a: ComparedSide, b: ComparedSide, computedAt: st
     facilities: facilityChanges(a.exposure, b.exposure),
     secondsGained: secondsGainedLayer(gridA.grid, gridB.grid),
     gridCellKm: geometry.cellKm,
+    gridBbox: geometry.bbox,
   };
 }

@@ -179,7 +179,7 @@ export const secondsGainedSchema = z.object({
   features: z.array(
     z.object({
       type: z.literal("Feature"),
-      properties: z.object({ layer: z.literal("seconds-gained"), label: z.string(), lowerS: z.number().nullable(), upperS: z.number().nullable() }),
+      properties: z.object({ layer: z.literal("seconds-gained"), label: z.string(), lowerS: z.number().nullable(), upperS: z.number().nullable(), colour: z.string() }),
       geometry: geometrySchema,
     }),
   ),
@@ -206,8 +206,9 @@ export const comparisonSchema = z.object({
   movedToLessWarning: z.number(),
   facilities: z.array(facilityChangeSchema),
   secondsGained: secondsGainedSchema,
-  /** Cell size of the grid the areas and the seconds-gained layer come from, km. */
+  /** Cell size of the grid the areas and the seconds-gained layer come from, km, and its [west, south, east, north]. */
   gridCellKm: z.number(),
+  gridBbox: z.tuple([z.number(), z.number(), z.number(), z.number()]),
 });
 export type Comparison = z.infer<typeof comparisonSchema>;
 
