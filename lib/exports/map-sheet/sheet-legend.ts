@@ -52,7 +52,8 @@ export function sheetLegend(view: Pick<MapSheetView, "legend" | "overlays">, sce
   const blind = of("blind-zone")[0];
   if (blind) areas.push({ label: "Blind zone: shaking before any alert (warning ≤ 0 s)", symbol: { kind: "fill", fill: { hex: blind.fill, opacity: blind.opacity } } });
   const alertArea = of("alert-area")[0];
-  if (alertArea) areas.push({ label: "Alert area: places the alert goes to", symbol: { kind: "fill", fill: { hex: alertArea.fill, opacity: alertArea.opacity } } });
+  // The workspace draws the alert area as a dashed outline (components/map/result-layers.ts).
+  if (alertArea) areas.push({ label: "Alert area: places the alert goes to", symbol: { kind: "line", colour: alertArea.fill, widthPt: 1.5, dashPt: [3, 2] } });
   if (areas.length) groups.push({ title: "Areas", items: areas });
 
   const points: LegendItem[] = [];

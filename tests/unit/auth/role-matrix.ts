@@ -194,6 +194,7 @@ export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
     // A PNG sheet needs no image on the server: the composed marks come back as JSON.
     cases: fileExportCases().map((c) => ({ ...c, body: () => ({ view: MATRIX_SHEET_VIEW }) })),
   },
+  "GET /api/scenarios/[scenarioId]/versions/[number]/exports/facilities": { cases: fileExportCases() },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/handout": { cases: fileExportCases("?lon=150.4&lat=-30.0&name=Matrix%20school") },
   "GET /api/scenarios/[scenarioId]/versions/[number]/exports/exposure": {
     cases: [

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
+import { ScenarioExports } from "@/components/exports/scenario-exports";
 import { VersionVisibility } from "@/components/publishing/version-visibility";
 import { StateBadge } from "@/components/scenarios/state-badge";
 import { ScenarioWorkspace, type LayerRef } from "@/components/workspace/scenario-workspace";
@@ -103,6 +104,7 @@ export default async function ScenarioPage(props: {
         actions={settings.actions.map((a) => ({ name: a.name, secondsNeeded: a.secondsNeeded }))}
         layers={layers}
       />
+      <ScenarioExports scenarioId={scenario.id} versionNumber={version.number} canExportFiles={can(user.role, "export:files")} />
     </div>
   );
 }
