@@ -144,6 +144,7 @@ export function SourceForm({ draft, dispatch, issueAt, workspaceScale }: { draft
                 dispatch({ type: "set-area", patch: { bbox } });
               }}
               error={issueAt(`area.bbox[${index}]`)}
+              testId={`area-${label.toLowerCase()}`}
             />
           ))}
         </div>
