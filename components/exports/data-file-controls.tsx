@@ -3,13 +3,15 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/text-field";
-import { EXPOSURE_TABLES, type ExposureTableId } from "@/lib/exports/exposure-csv";
+import { EXPOSURE_CSV_TABLES, type ExposureCsvTable } from "@/lib/exposure/csv-tables";
 import { downloadExport } from "./download";
 
-const EXPOSURE_LABELS: Record<ExposureTableId, string> = {
-  "intensity-band": "Exposure: intensity × warning (CSV)",
-  district: "Exposure by district (CSV)",
-  channel: "Exposure by channel (CSV)",
+const EXPOSURE_LABELS: Record<ExposureCsvTable, string> = {
+  "class-band": "Exposure: intensity × warning (CSV)",
+  districts: "Exposure by district (CSV)",
+  channels: "Exposure by channel (CSV)",
+  actions: "Protective actions (CSV)",
+  facilities: "Facilities (CSV)",
 };
 
 type Run = (what: string, action: () => Promise<void>) => Promise<void>;
@@ -18,7 +20,7 @@ type Run = (what: string, action: () => Promise<void>) => Promise<void>;
 export function ExposureFileControls({ exportsUrl, busy, run }: { exportsUrl: string; busy: string | null; run: Run }) {
   return (
     <div className="flex flex-wrap gap-2">
-      {EXPOSURE_TABLES.map((table) => (
+      {EXPOSURE_CSV_TABLES.map((table) => (
         <Button key={table} variant="secondary" disabled={busy !== null} onClick={() => run(`exposure-${table}`, () => downloadExport(`${exportsUrl}/exposure?table=${table}`))} data-testid={`export-exposure-${table}`}>
           {EXPOSURE_LABELS[table]}
         </Button>

@@ -200,7 +200,7 @@ export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
     cases: [
       // Council may download exposure CSV, but only of versions they may see (published).
       { name: "shared version", params: (f) => exportableVersion(f, "shared"), expect: fromBrief(EXPOSURE_CSV, 200, { council: 403 }) },
-      { name: "published version", params: (f) => exportableVersion(f, "published"), query: "?table=district", expect: fromBrief(EXPOSURE_CSV, 200) },
+      { name: "published version", params: (f) => exportableVersion(f, "published"), query: "?table=districts", expect: fromBrief(EXPOSURE_CSV, 200) },
     ],
   },
   "GET /api/exports/[scenarioId]": { cases: [{ params: (f) => ({ scenarioId: f.scenarioId }), expect: signedIn(200) }] },

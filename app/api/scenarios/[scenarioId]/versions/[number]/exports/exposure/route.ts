@@ -1,32 +1,29 @@
 import { z } from "zod";
 import { parseWith, route } from "@/lib/api/handler";
-import { CAUTION } from "@/lib/caution";
-import { computeExposure, describeProvenance } from "@/lib/geo";
+import { scenarioVersionParamsSchema } from "@/lib/api/params";
+import { requirePermission } from "@/lib/auth/session";
+import { writeCsv } from "@/lib/csv/write-csv";
+import { loadVisibleVersion } from "@/lib/exposure/access";
+import { EXPOSURE_CSV_TABLES, exposureCsv } from "@/lib/exposure/csv-tables";
+import { exposureOf } from "@/lib/exposure/service";
 import { downloadName } from "@/lib/exports/download-name";
-import { EXPOSURE_TABLES, exposureCsv } from "@/lib/exports/exposure-csv";
-import { beginExport, type ExportRouteContext } from "@/lib/exports/server/begin-export";
 import { recordExport } from "@/lib/exports/server/export-log";
-import { loadPopulation, loadVs30Cells } from "@/lib/exports/server/export-source";
 import { downloadResponse } from "@/lib/exports/server/respond";
 
-const querySchema = z.object({ table: z.enum(EXPOSURE_TABLES, `table must be one of ${EXPOSURE_TABLES.join(", ")}`).default("intensity-band") });
+const querySchema = z.object({ table: z.enum(EXPOSURE_CSV_TABLES, `table must be one of ${EXPOSURE_CSV_TABLES.join(", ")}`).default("class-band") });
 
 /**
- * GET …/exports/exposure?table=intensity-band|district|channel — one exposure table as CSV, from
- * the version's population layer. Everyone who may see the version may download it (brief: "download
- * exposure CSV").
+ * GET …/exports/exposure?table=class-band|districts|channels|actions|facilities — one exposure
+ * table as CSV, the same (cached) tables the exposure page shows (lib/exposure), recorded in the
+ * export log. Everyone who may see the version may download it (brief: "download exposure CSV").
  */
-export const GET = route(async (request, context: ExportRouteContext) => {
-  const { user, source } = await beginExport(context, "exposure:csv");
+export const GET = route(async (request, context: { params: Promise<{ scenarioId: string; number: string }> }) => {
+  const { scenarioId, number } = parseWith(scenarioVersionParamsSchema, await context.params, "Scenario version address");
   const { table } = parseWith(querySchema, Object.fromEntries(new URL(request.url).searchParams), "The table");
-  const [population, vs30Cells] = await Promise.all([loadPopulation(source), loadVs30Cells(source)]);
-  const result = computeExposure(source.scenario, population, {
-    vs30Cells,
-    ...source.context,
-    actions: source.actions.map((a) => ({ id: a.id, seconds: a.secondsNeeded })),
-    reactionS: source.reactionTimeS,
-  });
-  const csv = exposureCsv(result, table, { caution: CAUTION, howItWasMade: describeProvenance(result.provenance), notes: result.notes });
-  await recordExport({ userId: user.id, kind: "exposure-csv", scenarioVersionId: source.versionId });
-  return downloadResponse(csv, { contentType: "text/csv; charset=utf-8", filename: downloadName(source.scenarioName, source.versionNumber, `exposure-${table}`, "csv") });
+  const user = await requirePermission("exposure:csv");
+  const version = await loadVisibleVersion({ role: user.role, scenarioId, number });
+  const { exposure } = await exposureOf(version);
+  const csv = writeCsv(exposureCsv(exposure, table));
+  await recordExport({ userId: user.id, kind: "exposure-csv", scenarioVersionId: version.row.id });
+  return downloadResponse(csv, { contentType: "text/csv; charset=utf-8", filename: downloadName(version.ref.scenarioName, number, `exposure-${table}`, "csv") });
 });
