@@ -1,15 +1,13 @@
 import "server-only";
-import { asc, eq, inArray } from "drizzle-orm";
-import { db } from "@/db/client";
-import { readGridLayer, readLayerContent } from "@/db/queries/layers";
+import { describeLayerVersions, readFacilities, readWorkspaceExposureSettings } from "@/db/queries/exposure";
+import { readGridLayer } from "@/db/queries/layers";
 import { findScenario, findScenarioVersion } from "@/db/queries/scenarios";
-import { layers, layerVersions, protectiveActions, settings } from "@/db/schema";
 import { canViewScenarioState } from "@/lib/auth/permissions";
 import type { CurrentUser } from "@/lib/auth/session";
 import { LeewayError } from "@/lib/errors";
 import type { PopulationCells, ProvenanceContext, Vs30Cells } from "@/lib/geo";
-import { INTENSITY_SCALE_IDS, type IntensityScaleId } from "@/lib/geo/intensity/scales";
-import type { FacilityFeature } from "@/lib/layers/parsed-layer";
+import type { IntensityScaleId } from "@/lib/geo/intensity/scales";
+import type { StoredFacility } from "@/lib/exposure/facility-rows";
 import { parseScenario, type Scenario } from "@/lib/scenario/schema";
 
 /** A protective action of the workspace list. */
@@ -17,11 +15,6 @@ export interface ExportAction {
   id: string;
   name: string;
   secondsNeeded: number;
-}
-
-/** A facility of the version's facilities layer, with its position in that layer as its id. */
-export interface ExportFacility extends FacilityFeature {
-  id: number;
 }
 
 /** One scenario version, checked for the caller, with what every export reads. */
@@ -45,29 +38,9 @@ export interface ExportSource {
   context: Required<ProvenanceContext>;
 }
 
-const DEFAULT_REACTION_TIME_S = 0;
-
-async function readSettings(): Promise<{ intensityScale: IntensityScaleId; reactionTimeS: number }> {
-  const rows = await db.select().from(settings);
-  const byKey = new Map(rows.map((r) => [r.key, r.value]));
-  const scale = byKey.get("intensityScale");
-  const reaction = byKey.get("reactionTimeS");
-  return {
-    intensityScale: INTENSITY_SCALE_IDS.find((id) => id === scale) ?? "jma",
-    reactionTimeS: typeof reaction === "number" && reaction >= 0 ? reaction : DEFAULT_REACTION_TIME_S,
-  };
-}
-
-/** "population v2, districts v1 …" for the provenance record: names by role, with each layer version's own number. */
+/** "2 (Tessarine population (demo))" by role, for the provenance record: each layer version's own number and its layer's name. */
 async function layerVersionLabels(ids: Record<string, number>): Promise<Record<string, string>> {
-  const values = Object.values(ids);
-  if (values.length === 0) return {};
-  const rows = await db
-    .select({ id: layerVersions.id, number: layerVersions.number, name: layers.name })
-    .from(layerVersions)
-    .innerJoin(layers, eq(layers.id, layerVersions.layerId))
-    .where(inArray(layerVersions.id, values));
-  const byId = new Map(rows.map((r) => [r.id, r]));
+  const byId = new Map((await describeLayerVersions({ ids: Object.values(ids) })).map((r) => [r.id, r]));
   return Object.fromEntries(
     Object.entries(ids).flatMap(([role, id]) => {
       const row = byId.get(id);
@@ -99,10 +72,7 @@ export async function loadExportSource({ scenarioId, number, user, now }: { scen
       issues: parsed.issues,
     });
   }
-  const [workspace, actionRows] = await Promise.all([
-    readSettings(),
-    db.select().from(protectiveActions).orderBy(asc(protectiveActions.position), asc(protectiveActions.id)),
-  ]);
+  const workspace = await readWorkspaceExposureSettings();
   const layerVersionIds = layerIdsOf(row.version.layerVersions);
   const stored = parsed.scenario;
   return {
@@ -115,7 +85,7 @@ export async function loadExportSource({ scenarioId, number, user, now }: { scen
     scenario: stored.intensityScale ? stored : { ...stored, intensityScale: workspace.intensityScale },
     workspaceScale: workspace.intensityScale,
     reactionTimeS: workspace.reactionTimeS,
-    actions: actionRows.map((a) => ({ id: String(a.id), name: a.name, secondsNeeded: a.secondsNeeded })),
+    actions: workspace.actions,
     layerVersionIds,
     context: { computedAt: now.toISOString(), scenarioVersion: number, layerVersions: await layerVersionLabels(layerVersionIds) },
   };
@@ -137,11 +107,8 @@ export async function loadPopulation(source: ExportSource): Promise<PopulationCe
   return { lon: grid.lon, lat: grid.lat, population: grid.value, district: grid.district, districtNames: grid.districtNames };
 }
 
-/** The version's facilities (empty when it recorded no facilities layer). */
-export async function loadFacilities(source: ExportSource): Promise<ExportFacility[]> {
+/** The version's facilities with their stored ids (empty when it recorded no facilities layer). */
+export async function loadFacilities(source: ExportSource): Promise<StoredFacility[]> {
   const id = source.layerVersionIds.facilities;
-  if (id === undefined) return [];
-  const content = await readLayerContent({ layerVersionId: id });
-  if (content.kind !== "facilities") return [];
-  return content.facilities.map((f, index) => ({ ...f, id: index + 1 }));
+  return id === undefined ? [] : readFacilities({ layerVersionId: id });
 }

@@ -27,10 +27,10 @@ async function siteOf(source: ExportSource, query: z.infer<typeof querySchema>, 
   const facility = (await loadFacilities(source)).find((f) => f.id === query.facility);
   if (!facility) throw new LeewayError("not-found", `Version ${source.versionNumber} of "${source.scenarioName}" has no facility ${query.facility}.`);
   if (facility.geometry.type === "Point") {
-    const [lon, lat] = facility.geometry.coordinates as [number, number];
+    const [lon, lat] = facility.geometry.coordinates;
     return { name: facility.name, kind: facility.kind, lon, lat };
   }
-  const lines = evaluateFacilities(source.scenario, { lines: [{ id: String(facility.id), coordinates: facility.geometry.coordinates as [number, number][] }] }, { vs30Cells, ...source.context }).lines;
+  const lines = evaluateFacilities(source.scenario, { lines: [{ id: String(facility.id), coordinates: facility.geometry.coordinates }] }, { vs30Cells, ...source.context }).lines;
   const [lon, lat] = lines[0].minWarningAt;
   return { name: `${facility.name} (its point of shortest warning)`, kind: facility.kind, lon, lat };
 }

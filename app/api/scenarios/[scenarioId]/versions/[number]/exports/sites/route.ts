@@ -25,9 +25,9 @@ const querySchema = z.object({ point: z.array(pointSchema).max(200, "at most 200
 export const GET = route(async (request, context: ExportRouteContext) => {
   const { user, source } = await beginExport(context, "export:files");
   const { point } = parseWith(querySchema, { point: new URL(request.url).searchParams.getAll("point") }, "The typed points");
-  const facilities = (await loadFacilities(source)).filter((f) => f.geometry.type === "Point");
+  const points = (await loadFacilities(source)).flatMap((f) => (f.geometry.type === "Point" ? [{ ...f, lonLat: f.geometry.coordinates }] : []));
   const labelled = [
-    ...facilities.map((f) => ({ id: `facility-${f.id}`, name: f.name, kind: f.kind, lon: f.geometry.coordinates[0] as number, lat: f.geometry.coordinates[1] as number })),
+    ...points.map((f) => ({ id: `facility-${f.id}`, name: f.name, kind: f.kind, lon: f.lonLat[0], lat: f.lonLat[1] })),
     ...point.map(([lon, lat], k) => ({ id: `point-${k + 1}`, name: `Typed point ${k + 1}`, kind: "point", lon, lat })),
   ];
   const result = computeSites(source.scenario, labelled.map(({ id, lon, lat }) => ({ id, lon, lat })), { vs30Cells: await loadVs30Cells(source), ...source.context });
