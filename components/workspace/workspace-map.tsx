@@ -85,13 +85,22 @@ export function WorkspaceMap(props: WorkspaceMapProps) {
     [draft.name, source.lon, source.lat, source.mw, source.depthKm, source.faultType],
   );
 
+  // Contours go to the map only for visible layers: handing GeoJSON to MapLibre's worker costs main-thread time.
+  const contoursOnMap = useRef(new Map<string, FeatureCollection>());
   useEffect(() => {
     if (!map || !results) return;
-    setData(map, RESULT_SOURCE_IDS.warning, results.contours.warning);
-    setData(map, RESULT_SOURCE_IDS.intensity, results.contours.intensity);
-    setData(map, RESULT_SOURCE_IDS.alertArea, results.contours.alertArea);
-    setData(map, RESULT_SOURCE_IDS.blindZone, results.contours.blindZone);
-  }, [map, results]);
+    const layers: [LayerSwitchId, string, FeatureCollection][] = [
+      ["warning", RESULT_SOURCE_IDS.warning, results.contours.warning],
+      ["intensity", RESULT_SOURCE_IDS.intensity, results.contours.intensity],
+      ["alertArea", RESULT_SOURCE_IDS.alertArea, results.contours.alertArea],
+      ["blindZone", RESULT_SOURCE_IDS.blindZone, results.contours.blindZone],
+    ];
+    for (const [switchId, sourceId, data] of layers) {
+      if (!visibleLayers[switchId] || contoursOnMap.current.get(sourceId) === data) continue;
+      setData(map, sourceId, data);
+      contoursOnMap.current.set(sourceId, data);
+    }
+  }, [map, results, visibleLayers]);
 
   useEffect(() => {
     map?.setPaintProperty(RESULT_LAYER_IDS.warning, "fill-color", warningFillColour(bandIds) as ExpressionSpecification);

@@ -4,6 +4,7 @@ import { engineGridSection } from "./sections/engine-grid";
 import { exposureSection } from "./sections/exposure";
 import { ruptureAndWavefieldSection } from "./sections/rupture-and-wavefield";
 import { layersSection } from "./sections/layers";
+import { workerSection } from "./sections/worker";
 import type { BenchSection } from "./section";
 
 /** Every benchmark section, in the order `npm run bench` runs them: add one line per new section file. */
@@ -12,6 +13,7 @@ export const SECTIONS: BenchSection[] = [
   contoursSection,
   exposureSection,
   ruptureAndWavefieldSection,
+  workerSection,
   cliSection,
   layersSection,
 ];

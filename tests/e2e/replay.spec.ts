@@ -16,8 +16,9 @@ const MARGIN_S = 0.1;
 test("replay at t = 10 s: the P front where t_P = 10 s, stations triggered from their P time, alert moments per channel", async ({ page }) => {
   test.setTimeout(120_000);
   await signIn(page, "planner");
-  const { scenarios } = (await (await page.request.get("/api/scenarios")).json()) as { scenarios: { id: number; latest: { number: number; source: { faultType: string } | null } }[] };
-  const crustal = scenarios.find((s) => s.latest.source?.faultType === "crustal")!;
+  const { scenarios } = (await (await page.request.get("/api/scenarios")).json()) as { scenarios: { id: number; latest: { number: number; state: string; source: { faultType: string } | null } }[] };
+  // The seeded crustal scenario (shared for exercises), whatever other scenarios tests have added.
+  const crustal = scenarios.find((s) => s.latest.state === "shared" && s.latest.source?.faultType === "crustal")!;
   const { version } = await (await page.request.get(`/api/scenarios/${crustal.id}/versions/${crustal.latest.number}`)).json();
   const source = version.params.source as Point & { depthKm: number };
   const stations = version.params.stations as (Point & { id: string; operating?: boolean })[];

@@ -177,7 +177,8 @@ test("a council member opens the published scenario read-only; writes through th
 
 test("the site card gives what the command line gives for the same point, to the printed precision", async ({ page }) => {
   await signIn(page, "planner");
-  const crustal = (await listScenarios(page)).find((s) => s.latest.source?.faultType === "crustal")!;
+  // The seeded crustal scenario (shared for exercises): a finite rupture in the layered IASP91 model.
+  const crustal = (await listScenarios(page)).find((s) => s.latest.state === "shared" && s.latest.source?.faultType === "crustal")!;
   const ws = new WorkspacePage(page);
   await ws.open(crustal.id);
   const point = { lon: -126.05, lat: -46.75 };
