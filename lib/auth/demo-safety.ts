@@ -24,3 +24,12 @@ export async function demoAccountsBlockingProduction(
     client.close();
   }
 }
+
+/** Ends the process with the reason when production must not start (called from instrumentation.ts). */
+export async function refuseProductionWithDemoAccounts(): Promise<void> {
+  const reason = await demoAccountsBlockingProduction();
+  if (reason) {
+    console.error(reason);
+    process.exit(1);
+  }
+}

@@ -83,9 +83,12 @@ test("a planner publishes to council with a note, and the council member's notic
   expect(notice.subject).toBe(`Leeway: "${SCENARIO_NAME}" version 1 published to council`);
   expect(firstLink(notice).pathname + firstLink(notice).search).toBe(`/scenarios/${scenarioId}/council?v=1`);
   expect(notice.text).toContain("Note: For the spring drill briefing");
-  expect(notice.text).toContain("Magnitude (Mw):");
+  expect(notice.text).toContain("Magnitude (Mw): 7.1");
+  // The exposure engine's figures for the demo layers, not only the source's.
+  expect(notice.text).toMatch(/People in the blind zone \(shaking before any alert\): [\d,]+ people/);
+  expect(notice.text).toMatch(/People alerted 10 s or more before the shaking: [\d,]+ people/);
   expect(notice.text).toContain("Caution: Scenario results are planning estimates");
-  expect(notice.text).toMatch(/How it was made: Leeway \d+\.\d+\.\d+ · ground motion: /);
+  expect(notice.text).toMatch(/How it was made: Leeway \d+\.\d+\.\d+; ground motion: .+; scenario: .+ v1; layers: .*population v\d+/);
 
   const council = await pageAs(browser, "council");
   await expect(council.page.getByTestId("scenario-list")).toContainText(SCENARIO_NAME);
