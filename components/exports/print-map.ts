@@ -85,15 +85,17 @@ export async function renderPrintMap(live: MapLibreMap, frame: Pick<Box, "widthP
     canvasContextAttributes: { preserveDrawingBuffer: true },
   });
   try {
+    // Errors do not stop the print: the basemap has no files for empty tiles, and each missing one
+    // is reported as an error while the map draws on. Only a map that never settles fails.
+    let lastError = "";
+    map.on("error", (event) => {
+      lastError = event.error?.message ?? String(event);
+    });
     await new Promise<void>((resolve, reject) => {
-      const timer = setTimeout(() => reject(new Error("the print map did not finish drawing within a minute")), IDLE_TIMEOUT_MS);
+      const timer = setTimeout(() => reject(new Error(`the print map did not finish drawing within a minute${lastError ? ` (last error: ${lastError})` : ""}`)), IDLE_TIMEOUT_MS);
       map.once("idle", () => {
         clearTimeout(timer);
         resolve();
-      });
-      map.once("error", (event) => {
-        clearTimeout(timer);
-        reject(event.error ?? new Error("the print map could not be drawn"));
       });
     });
     const canvas = map.getCanvas();
