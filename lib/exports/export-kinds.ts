@@ -11,6 +11,3 @@ export const EXPORT_KINDS = {
 } as const;
 
 export type ExportKind = keyof typeof EXPORT_KINDS;
-
-/** Every kind, in the order the menu lists them. */
-export const EXPORT_KIND_IDS = Object.keys(EXPORT_KINDS) as ExportKind[];

@@ -96,7 +96,9 @@ describe("the export log", () => {
 
   it("refuses a stored version that is not a valid scenario file (409), naming the field", async () => {
     // A partial file: no site conditions and no area.
-    const { vs30: _vs30, area: _area, ...partial } = SCENARIO_FILE;
+    const partial: Partial<typeof SCENARIO_FILE> = { ...SCENARIO_FILE };
+    delete partial.vs30;
+    delete partial.area;
     await addVersion(fixture, partial);
     app.signInAs("planner");
     const response = await getExport("contours", fixture.scenarioId, 4);
