@@ -4,6 +4,7 @@ import { engineGridSection } from "./sections/engine-grid";
 import { exposureSection } from "./sections/exposure";
 import { ruptureAndWavefieldSection } from "./sections/rupture-and-wavefield";
 import { layersSection } from "./sections/layers";
+import { serverExposureSection } from "./sections/server-exposure";
 import { workerSection } from "./sections/worker";
 import type { BenchSection } from "./section";
 
@@ -16,4 +17,5 @@ export const SECTIONS: BenchSection[] = [
   workerSection,
   cliSection,
   layersSection,
+  serverExposureSection,
 ];
