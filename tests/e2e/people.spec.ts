@@ -84,3 +84,19 @@ test("a tampered invitation link gets a clear page", async ({ page }) => {
   await page.goto("/reset-password/not-a-token");
   await expect(page.getByTestId("link-problem")).toContainText("This reset link is not valid");
 });
+
+test("repeated failed sign-ins pause the account with a clear message", async ({ page }) => {
+  // An address without an account: the limit counts it like a real one (docs/people.md, 5 per 15 minutes).
+  const email = "no-such-person@council.example";
+  await page.goto("/sign-in");
+  for (let attempt = 1; attempt <= 5; attempt += 1) {
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill(`wrong-guess-${attempt}`);
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await expect(page.getByTestId("sign-in-error")).toHaveText("E-mail or password is not right.");
+  }
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.getByTestId("sign-in-error")).toContainText("Too many failed sign-ins for this account. Try again in 15 minutes");
+  // The other browser tests sign in from the same address; leave them its full allowance.
+  await db.execute("delete from sign_in_attempts");
+});
