@@ -104,7 +104,7 @@ const facilityLines: LineLayerSpecification = {
   source: RESULT_SOURCE_IDS.facilities,
   filter: ["==", ["geometry-type"], "LineString"],
   layout: hidden,
-  paint: { "line-color": L.facility, "line-width": byZoom(5, 2, 11, 4) },
+  paint: { "line-color": L.facility, "line-width": byZoom(5, 1.2, 11, 3), "line-opacity": 0.8 },
 };
 
 const facilityPoints: CircleLayerSpecification = {
@@ -183,11 +183,12 @@ const EMPTY: SourceSpecification = { type: "geojson", data: { type: "FeatureColl
 /** The workspace's extension of the region map, for a scenario whose warning bands have these ids. */
 export function workspaceMapExtension(warningBandIds: readonly string[]): MapExtension {
   const sources = Object.fromEntries(Object.values(RESULT_SOURCE_IDS).map((id) => [id, EMPTY]));
+  // Population density, when switched on, lies over the result fills: it is the layer being looked at then.
   const below: LayerSpecification[] = [
-    fill(RESULT_LAYER_IDS.population, RESULT_SOURCE_IDS.population, populationFillColour(), 0.75, false),
     fill(RESULT_LAYER_IDS.intensity, RESULT_SOURCE_IDS.intensity, intensityFillColour(), RESULT_FILL_OPACITY, false),
     fill(RESULT_LAYER_IDS.warning, RESULT_SOURCE_IDS.warning, warningFillColour(warningBandIds)),
     fill(RESULT_LAYER_IDS.blindZoneFill, RESULT_SOURCE_IDS.blindZone, L.blindZoneEdge, 0.18),
+    fill(RESULT_LAYER_IDS.population, RESULT_SOURCE_IDS.population, populationFillColour(), 0.85, false),
   ];
   const above: LayerSpecification[] = [blindZoneLine, alertArea, facilityLines, facilityPoints, fronts, frontLabels, replayStations, ruptureLine, handles, site];
   return { sources, below, above };

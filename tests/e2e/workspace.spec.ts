@@ -56,12 +56,18 @@ async function listScenarios(page: Page): Promise<ScenarioSummary[]> {
 }
 
 /** Puts the measured figure into docs/workspace.md between its markers (the README section). */
-function recordLongestTask(ms: number) {
+function recordLongestTask(tasksMs: number[], dragMs: number, panTasksMs: number[]) {
   const file = path.join("docs", "workspace.md");
   const text = readFileSync(file, "utf8");
-  const line = `Longest main-thread task during the drag test: **${ms.toFixed(0)} ms** (${ms < 50 ? "no task reached the 50 ms long-task bar" : "PerformanceObserver long tasks"}; Chromium with SwiftShader, ${new Date().toISOString().slice(0, 10)}).`;
+  const ms = Math.max(0, ...tasksMs);
+  const line =
+    `Longest main-thread task during the drag test: **${ms.toFixed(0)} ms** ` +
+    `(PerformanceObserver "longtask": ${tasksMs.length} task${tasksMs.length === 1 ? "" : "s"} of 50 ms or more during a ${(dragMs / 1000).toFixed(1)} s drag and the full grid after it; ` +
+    `Chromium with SwiftShader's software WebGL on a 2-core machine, ${new Date().toISOString().slice(0, 10)}). ` +
+    `For scale, a 3 s animated pan of the same map with nothing recomputed gives ${panTasksMs.length} long tasks, the longest ${Math.max(0, ...panTasksMs).toFixed(0)} ms: ` +
+    "most of the time is the map drawing frames in software WebGL.";
   writeFileSync(file, text.replace(/<!-- drag-longest-task -->[\s\S]*?<!-- \/drag-longest-task -->/, `<!-- drag-longest-task -->\n${line}\n<!-- /drag-longest-task -->`));
-  writeFileSync(path.join("tests", "artifacts", "workspace-drag-longest-task.txt"), `${ms}\n`);
+  writeFileSync(path.join("tests", "artifacts", "workspace-drag-long-tasks.json"), `${JSON.stringify({ longestMs: ms, tasksMs, dragMs, panTasksMs })}\n`);
 }
 
 test("a planner creates a scenario, drags the epicentre, adds a station, saves, and finds it all again", async ({ page }) => {
@@ -82,10 +88,20 @@ test("a planner creates a scenario, drags the epicentre, adds a station, saves, 
   const before = { lon: await ws.fieldValue("source-lon"), lat: await ws.fieldValue("source-lat") };
   const contoursBefore = await ws.sourceData("result-warning");
   await ws.startLongTaskRecording();
+  const dragStart = Date.now();
   await ws.dragSource(before, 90, 60);
-  const longestTaskMs = await ws.longestTaskMs();
-  console.info(`longest main-thread task during the drag: ${longestTaskMs.toFixed(0)} ms`);
-  recordLongestTask(longestTaskMs);
+  const dragMs = Date.now() - dragStart;
+  const longTasksMs = await ws.longTasksMs();
+  console.info(`long main-thread tasks during the drag (ms): ${longTasksMs.map((t) => t.toFixed(0)).join(", ") || "none"}`);
+  // Baseline: the same map panned for 3 s, drawing frames only.
+  await ws.startLongTaskRecording();
+  await page.evaluate(() => window.__leewayMap!.panBy([120, 60], { duration: 3000 }));
+  await page.waitForTimeout(3500);
+  const panTasksMs = await ws.longTasksMs();
+  await page.evaluate(() => window.__leewayMap!.panBy([-120, -60], { duration: 0 }));
+  await ws.waitForFullResults();
+  console.info(`long tasks during a 3 s pan (ms): ${panTasksMs.map((t) => t.toFixed(0)).join(", ") || "none"}`);
+  recordLongestTask(longTasksMs, dragMs, panTasksMs);
   const after = { lon: await ws.fieldValue("source-lon"), lat: await ws.fieldValue("source-lat") };
   expect(geodesicKm(before, after)).toBeGreaterThan(5);
   expect(await ws.sourceData("result-warning")).not.toEqual(contoursBefore);
@@ -188,6 +204,13 @@ test("the site card gives what the command line gives for the same point, to the
   await page.getByTestId("site-input-show").click();
   await expect(page.getByTestId("site-hypocentral-km")).toHaveText(/\d/);
   await page.getByTestId("site-card").screenshot({ path: "tests/artifacts/workspace-site-card.png" });
+  // Every layer with a legend switched on, for the eye (tests/artifacts).
+  for (const id of ["intensity", "population", "facilities"]) await page.getByTestId(`layer-${id}`).check();
+  await expect(page.getByTestId("legend-population")).toBeVisible();
+  await expect(page.getByTestId("legend-intensity-rows").getByRole("listitem")).toHaveCount(9);
+  await expect(ws.map).toHaveAttribute("data-map-idle", "true");
+  await page.waitForTimeout(1500);
+  await page.screenshot({ path: "tests/artifacts/workspace-all-layers.png", fullPage: true });
 
   // The same file the workspace computes: the stored version with the workspace's intensity scale (JMA in the demo) when it names none.
   const { version } = await (await page.request.get(`/api/scenarios/${crustal.id}/versions/${crustal.latest.number}`)).json();
@@ -215,4 +238,43 @@ test("the site card gives what the command line gives for the same point, to the
     expect(await text(`site-channel-${i}-warning-s`)).toMatch(new RegExp(`^${Math.floor(c.warningS)}( \\(blind\\))?$`));
   }
   expect(await text("site-channel-0-alert-s")).toBe(tenth(cli.alertS));
+});
+
+test("dragging a rupture end keeps the other end: strike and length follow the two ends (checked with GeographicLib)", async ({ page }) => {
+  await signIn(page, "planner");
+  const crustal = (await listScenarios(page)).find((s) => s.latest.state === "shared" && s.latest.source?.faultType === "crustal")!;
+  const ws = new WorkspacePage(page);
+  await ws.open(crustal.id);
+  const epicentre = { lon: await ws.fieldValue("source-lon"), lat: await ws.fieldValue("source-lat") };
+  const strikeDeg = await ws.fieldValue("rupture-strike");
+  const lengthKm = await ws.fieldValue("rupture-length");
+  // The seeded crustal rupture grows both ways: its ends lie lengthKm / 2 along strike either side of the epicentre.
+  const along = (from: Point, azimuthDeg: number, km: number) => {
+    const r = Geodesic.WGS84.Direct(from.lat, from.lon, azimuthDeg, km * 1000);
+    return { lon: r.lon2!, lat: r.lat2! };
+  };
+  const start = along(epicentre, strikeDeg + 180, lengthKm / 2);
+  const end = along(epicentre, strikeDeg, lengthKm / 2);
+
+  const grab = await ws.screenPoint(end.lon, end.lat);
+  const drop = { x: grab.x + 40, y: grab.y - 30 };
+  await page.mouse.move(grab.x, grab.y);
+  await page.mouse.down();
+  for (let i = 1; i <= 10; i++) await page.mouse.move(grab.x + (4 * i), grab.y - 3 * i);
+  await page.mouse.up();
+  await ws.waitForFullResults();
+  const box = (await ws.map.boundingBox())!;
+  const dropped = await page.evaluate(([x, y]) => window.__leewayMap!.unproject([x, y]), [drop.x - box.x, drop.y - box.y] as const);
+  const newEnd = { lon: dropped.lng, lat: dropped.lat };
+
+  const newEpicentre = { lon: await ws.fieldValue("source-lon"), lat: await ws.fieldValue("source-lat") };
+  const newStrike = await ws.fieldValue("rupture-strike");
+  const newLength = await ws.fieldValue("rupture-length");
+  const reference = Geodesic.WGS84.Inverse(start.lat, start.lon, newEnd.lat, newEnd.lon);
+  // Form values are rounded (0.1 km, 0.1°, 4 decimals of a degree); the drop point is one screen pixel, about 0.1 km here.
+  expect(newLength).toBeCloseTo((reference.s12 ?? NaN) / 1000, 0);
+  expect(Math.abs(newStrike - (((reference.azi1 ?? NaN) + 360) % 360))).toBeLessThan(0.5);
+  expect(geodesicKm(along(newEpicentre, newStrike + 180, newLength / 2), start)).toBeLessThan(0.3);
+  await expect(page.getByTestId("scenario-workspace")).toHaveAttribute("data-dirty", "true");
+  await ws.map.screenshot({ path: "tests/artifacts/workspace-rupture-dragged.png" });
 });
