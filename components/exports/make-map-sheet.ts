@@ -17,18 +17,6 @@ export interface SheetChoice {
   format: "pdf" | "png";
 }
 
-async function blobToImage(blob: Blob): Promise<HTMLImageElement> {
-  const url = URL.createObjectURL(blob);
-  try {
-    const image = new Image();
-    image.src = url;
-    await image.decode();
-    return image;
-  } finally {
-    URL.revokeObjectURL(url);
-  }
-}
-
 /** Produces and downloads the sheet; throws with the server's message when it refuses. */
 export async function makeMapSheet(live: MapLibreMap, exportsUrl: string, choice: SheetChoice): Promise<void> {
   const layout = sheetLayout(choice.paper, choice.orientation);
@@ -44,7 +32,8 @@ export async function makeMapSheet(live: MapLibreMap, exportsUrl: string, choice
   }
   const response = await ensureOk(await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ view }) }));
   const { drawing, filename } = sheetDrawingResponseSchema.parse(await response.json());
-  const image = await blobToImage(printed.png);
+  // Decoded without an <img>: the app's Content-Security-Policy allows no blob: images.
+  const image = await createImageBitmap(printed.png);
   await document.fonts.ready;
   const canvas = paintSheetCanvas(drawing, image, MAP_SHEET_DPI, getComputedStyle(document.body).fontFamily);
   const png = await new Promise<Blob>((resolve, reject) => canvas.toBlob((b) => (b ? resolve(b) : reject(new Error("the sheet could not be saved as PNG"))), "image/png"));
