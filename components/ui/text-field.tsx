@@ -1,12 +1,17 @@
 import { useId, type InputHTMLAttributes } from "react";
 
-/** A labelled input with an optional message under it, linked for screen readers. */
+/**
+ * A labelled input with an optional message under it. The message sits outside the label and is
+ * linked by aria-describedby, so it is announced without becoming part of the field's name.
+ */
 export function TextField({ label, error, ...props }: InputHTMLAttributes<HTMLInputElement> & { label: string; error?: string }) {
   const id = useId();
   const errorId = `${id}-error`;
   return (
-    <label htmlFor={id} className="block space-y-1">
-      <span className="text-sm font-semibold text-ink">{label}</span>
+    <div className="space-y-1">
+      <label htmlFor={id} className="block text-sm font-semibold text-ink">
+        {label}
+      </label>
       <input
         id={id}
         aria-invalid={error ? true : undefined}
@@ -15,10 +20,10 @@ export function TextField({ label, error, ...props }: InputHTMLAttributes<HTMLIn
         className="block w-full rounded-card border border-line-strong bg-surface px-3 py-2 text-base text-ink placeholder:text-ink-muted"
       />
       {error && (
-        <span id={errorId} className="block text-sm text-error-ink">
+        <p id={errorId} className="text-sm text-error-ink">
           {error}
-        </span>
+        </p>
       )}
-    </label>
+    </div>
   );
 }

@@ -2,7 +2,7 @@ import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { getEnv } from "@/lib/env";
-import { authorizeCredentials } from "./authorize";
+import { authorizeCredentials, SIGN_IN_UNAVAILABLE, SignInRefusedError } from "./authorize";
 
 export const authOptions: NextAuthOptions = {
   secret: getEnv().NEXTAUTH_SECRET,
@@ -13,7 +13,16 @@ export const authOptions: NextAuthOptions = {
       name: "Leeway account",
       credentials: { email: { type: "email" }, password: { type: "password" } },
       // Rate-limited per account and per client address (lib/auth/sign-in-limit.ts).
-      authorize: (raw, request) => authorizeCredentials(raw, request.headers),
+      async authorize(raw, request) {
+        try {
+          return await authorizeCredentials(raw, request.headers);
+        } catch (error) {
+          // next-auth shows the thrown message on the form: only Leeway's own refusals may reach it.
+          if (error instanceof SignInRefusedError) throw error;
+          console.error(error);
+          throw new Error(SIGN_IN_UNAVAILABLE);
+        }
+      },
     }),
   ],
   callbacks: {

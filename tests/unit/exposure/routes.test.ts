@@ -59,7 +59,7 @@ describe("exposure routes", () => {
 describe("comparison route", () => {
   it("names the malformed parameter", async () => {
     app.signInAs("planner");
-    const response = await compare(new Request("http://leeway.test/api/compare?a=3&b=3:2"));
+    const response = await compare(new Request("http://leeway.test/api/compare?a=3&b=3:2"), {});
     expect(response.status).toBe(400);
     expect((await response.json()).error.message).toMatch(/^Comparison request: a: must be scenarioId:version, e\.g\. 3:1/);
   });
@@ -67,7 +67,7 @@ describe("comparison route", () => {
   it("compares two versions the caller may see", async () => {
     const { a, b } = await comparableVersions("published");
     app.signInAs("council");
-    const response = await compare(new Request(`http://leeway.test/api/compare?a=${a}&b=${b}`));
+    const response = await compare(new Request(`http://leeway.test/api/compare?a=${a}&b=${b}`), {});
     expect(response.status).toBe(200);
     const { comparison } = await response.json();
     expect(comparison.totalPopulation).toBe(2000);
