@@ -43,7 +43,7 @@ async function callRoute(endpoint: Endpoint, testCase: RouteCase, caller: Caller
   const loaded = (await import(path.join(ROOT, endpoint.file))) as Record<string, AnyHandler>;
   const query = typeof testCase.query === "function" ? testCase.query(params) : (testCase.query ?? "");
   const url = `http://leeway.test${fillPath(routePathOf(endpoint.file), params)}${query}`;
-  const request = new Request(url, { method: endpoint.exportName, body: body === undefined ? undefined : JSON.stringify(body) });
+  const request = new Request(url, { method: endpoint.exportName, body: testCase.file ?? (body === undefined ? undefined : JSON.stringify(body)) });
   const response = await loaded[endpoint.exportName](request, { params: Promise.resolve(params) });
   return response.status;
 }

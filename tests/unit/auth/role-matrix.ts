@@ -7,10 +7,12 @@
 // that any signed-in person may (signedIn), and give the request that should succeed.
 import { app, type Fixture } from "../support/app";
 import { makeFixtureComputable } from "../support/computable-scenario";
+import { storeLayerVersion } from "@/db/queries/layers";
 import { issueAuthToken } from "@/db/queries/tokens";
 import { scenarios, scenarioVersions, users } from "@/db/schema";
 import { everyone, fromBrief, signedIn, type Expectation } from "./brief-roles";
 import { comparableVersions, computableVersion } from "../exposure/fixture";
+import { readLayerFile } from "@/lib/layers/read-layer-file";
 
 export interface RouteCase {
   /** Shown in the test name when a row has several cases. */
@@ -20,6 +22,8 @@ export interface RouteCase {
   /** A query string, or one made from the case's params (for ids the fixture writes first). */
   query?: string | ((params: Record<string, string>) => string);
   body?: (fixture: Fixture) => unknown;
+  /** A file's text sent as the raw body instead of JSON (the layer uploads read the body as the file). */
+  file?: string;
   expect: Expectation;
 }
 
@@ -123,6 +127,22 @@ const compareCases = (table = ""): RouteCase[] => [
 
 const versionParams = (number: keyof Fixture["versions"]) => (fixture: Fixture) => ({ scenarioId: fixture.scenarioId, number: fixture.versions[number] });
 
+/** Two population cells in the layer tests' invented region (tests/fixtures/layers), for the upload routes. */
+const MATRIX_POPULATION_CSV = "lon,lat,population\n-126.22,-46.90,1200\n-126.21,-46.90,850\n";
+const MATRIX_STATIONS_CSV = "id,lon,lat,operating\nMX01,-126.21,-46.89,true\nMX02,-126.12,-46.93,no\n";
+
+/** A stations layer of its own, used by no scenario version (so it may be deleted), stored as the upload route stores it. */
+async function matrixStationsLayer(fixture: Fixture) {
+  const layer = await readLayerFile("stations", "csv", MATRIX_STATIONS_CSV);
+  const stored = await storeLayerVersion({ layer, target: { name: "Matrix stations" }, sourceFile: "matrix-stations.csv", actorId: fixture.people.planner.id });
+  return { layerId: stored.layerId, number: stored.number };
+}
+const matrixLayerId = async (fixture: Fixture) => ({ layerId: (await matrixStationsLayer(fixture)).layerId });
+
+const EDIT = "edit scenarios, stations, layers; upload" as const;
+/** Reading layers has no row in the brief: lib/auth/permissions.ts "layer:view" (admin, planner, trainer; PERMISSION_ROWS in the test says why). */
+const LAYER_VIEW: Expectation = { none: 401, admin: 200, planner: 200, trainer: 200, council: 403 };
+
 export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
   "GET /api/auth/[...nextauth]": {
     notCalledHere: "next-auth's own handler needs Next's request scope; sign-in for every role is covered by tests/e2e and tests/unit/auth/sign-in-limit.test.ts",
@@ -204,6 +224,19 @@ export const ROUTE_MATRIX: Record<string, MatrixRow<RouteCase>> = {
     ],
   },
   "GET /api/exports/[scenarioId]": { cases: [{ params: (f) => ({ scenarioId: f.scenarioId }), expect: signedIn(200) }] },
+  "GET /api/layers": { cases: [{ expect: LAYER_VIEW }] },
+  "POST /api/layers": {
+    cases: [{ query: "?kind=population&format=csv&name=Matrix%20population&fileName=matrix-population.csv", file: MATRIX_POPULATION_CSV, expect: fromBrief(EDIT, 201) }],
+  },
+  // The preview answers 200 for a refused file too; this is the CSV POST /api/layers stores (201), so it is accepted.
+  "POST /api/layers/preview": { cases: [{ query: "?kind=population&format=csv", file: MATRIX_POPULATION_CSV, expect: fromBrief(EDIT, 200) }] },
+  "GET /api/layers/[layerId]": { cases: [{ params: matrixLayerId, expect: LAYER_VIEW }] },
+  "PATCH /api/layers/[layerId]": { cases: [{ params: matrixLayerId, body: () => ({ name: "Matrix stations, renamed" }), expect: fromBrief(EDIT, 200) }] },
+  "DELETE /api/layers/[layerId]": { cases: [{ params: matrixLayerId, expect: fromBrief(EDIT, 204) }] },
+  "POST /api/layers/[layerId]/versions": {
+    cases: [{ params: matrixLayerId, query: "?format=csv&fileName=matrix-stations-v2.csv", file: MATRIX_STATIONS_CSV, expect: fromBrief(EDIT, 201) }],
+  },
+  "GET /api/layers/[layerId]/versions/[number]/features": { cases: [{ params: matrixStationsLayer, expect: LAYER_VIEW }] },
 };
 
 const PEOPLE = "people, roles, invitations, outbox, audit trail" as const;
