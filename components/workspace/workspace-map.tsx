@@ -36,7 +36,7 @@ export interface WorkspaceMapProps {
   children?: React.ReactNode;
 }
 
-type DragTarget = { kind: "source" } | { kind: "rupture"; which: "start" | "end" } | { kind: "station"; index: number };
+type DragTarget = { kind: "source" } | { kind: "rupture"; which: "start" | "end"; fixed: LonLat } | { kind: "station"; index: number };
 
 const NONE: FeatureCollection = { type: "FeatureCollection", features: [] };
 const finite = (...values: unknown[]) => values.every((v) => typeof v === "number" && Number.isFinite(v));
@@ -149,7 +149,12 @@ export function WorkspaceMap(props: WorkspaceMapProps) {
       if (!hit) return null;
       if (hit.layer.id === RESULT_LAYER_IDS.handles) {
         const role = hit.properties.role as string;
-        return role === "source" ? { kind: "source" } : { kind: "rupture", which: role === "rupture-start" ? "start" : "end" };
+        if (role === "source") return { kind: "source" };
+        const { source } = latest.current.draft;
+        const rupture = source.rupture;
+        if (!rupture?.lengthKm) return null;
+        const ends = ruptureTraceEnds(source, { strikeDeg: rupture.strikeDeg, lengthKm: rupture.lengthKm, mode: rupture.mode ?? "unilateral" });
+        return role === "rupture-start" ? { kind: "rupture", which: "start", fixed: ends.end } : { kind: "rupture", which: "end", fixed: ends.start };
       }
       const index = latest.current.draft.stations.findIndex((s) => s.id === hit.properties.id);
       return index >= 0 ? { kind: "station", index } : null;
@@ -158,7 +163,7 @@ export function WorkspaceMap(props: WorkspaceMapProps) {
     const apply = (target: DragTarget, to: LonLat) => {
       const { dispatch } = latest.current;
       if (target.kind === "source") dispatch({ type: "move-source", to });
-      else if (target.kind === "rupture") dispatch({ type: "drag-rupture-end", which: target.which, to });
+      else if (target.kind === "rupture") dispatch({ type: "drag-rupture-end", which: target.which, fixed: target.fixed, to });
       else dispatch({ type: "move-station", index: target.index, to });
     };
 

@@ -23,7 +23,8 @@ export type DraftAction =
   | { type: "move-source"; to: LonLat }
   | { type: "set-source"; patch: Partial<Omit<DraftSource, "rupture">> }
   | { type: "set-rupture"; rupture: DraftRupture | undefined }
-  | { type: "drag-rupture-end"; which: "start" | "end"; to: LonLat }
+  /** `fixed`: the other end, where it was when the drag began. */
+  | { type: "drag-rupture-end"; which: "start" | "end"; to: LonLat; fixed: LonLat }
   | { type: "add-station"; at: LonLat }
   | { type: "move-station"; index: number; to: LonLat }
   | { type: "set-station"; index: number; patch: Partial<DraftStation> }
@@ -66,7 +67,8 @@ export function applyDraftAction(draft: ScenarioDraft, action: DraftAction): Sce
     case "drag-rupture-end": {
       const rupture = draft.source.rupture;
       if (!rupture || rupture.lengthKm === undefined) return draft;
-      const moved = dragRuptureEnd(draft.source, { strikeDeg: rupture.strikeDeg, lengthKm: rupture.lengthKm, mode: rupture.mode ?? "unilateral" }, action.which, action.to);
+      const moved = dragRuptureEnd(rupture.mode ?? "unilateral", action.which, action.fixed, action.to);
+      if (!moved) return draft;
       return {
         ...draft,
         source: { ...draft.source, ...at(moved.epicentre), rupture: { ...rupture, strikeDeg: roundTenth(moved.strikeDeg) % 360, lengthKm: Math.max(0.1, roundTenth(moved.lengthKm)) } },

@@ -45,6 +45,6 @@ describe("editing a scenario draft", () => {
 
   it("ignores a drag of the rupture's end while the rupture has no length", () => {
     const withRupture = applyDraftAction(DRAFT, { type: "set-rupture", rupture: { strikeDeg: 30, dipDeg: 60 } });
-    expect(applyDraftAction(withRupture, { type: "drag-rupture-end", which: "end", to: { lon: -126, lat: -46.8 } })).toBe(withRupture);
+    expect(applyDraftAction(withRupture, { type: "drag-rupture-end", which: "end", fixed: { lon: -126.3, lat: -46.9 }, to: { lon: -126, lat: -46.8 } })).toBe(withRupture);
   });
 });

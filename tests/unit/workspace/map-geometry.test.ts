@@ -1,5 +1,6 @@
 import { Geodesic } from "geographiclib-geodesic";
 import { describe, expect, it } from "vitest";
+import { applyDraftAction, type ScenarioDraft } from "@/lib/workspace/draft";
 import { dragRuptureEnd, ruptureTraceEnds } from "@/lib/workspace/rupture-trace";
 import { populationDensitySquares } from "@/lib/workspace/population-density";
 import { PREVIEW_MIN_CELLS_PER_SIDE, previewGrid } from "@/lib/workspace/preview-area";
@@ -11,6 +12,14 @@ function inverse(a: { lon: number; lat: number }, b: { lon: number; lat: number 
 }
 
 const EPICENTRE = { lon: -126.2, lat: -46.9 };
+
+const BASE_DRAFT: ScenarioDraft = {
+  version: 1,
+  source: { ...EPICENTRE, depthKm: 10, mw: 6.9, faultType: "crustal" },
+  stations: [{ id: "A", lon: -126.1, lat: -46.9 }],
+  vs30: 400,
+  area: { bbox: [-127, -47.5, -125.5, -46.3], cellKm: 2 },
+};
 
 describe("rupture trace on the ellipsoid (checked with GeographicLib)", () => {
   it("puts a unilateral rupture's start at the epicentre and its end lengthKm along strike", () => {
@@ -29,9 +38,8 @@ describe("rupture trace on the ellipsoid (checked with GeographicLib)", () => {
   });
 
   it("dragging the end keeps the start: length and strike are the start-to-end geodesic", () => {
-    const rupture = { strikeDeg: 40, lengthKm: 120, mode: "unilateral" as const };
     const to = { lon: -125.1, lat: -46.2 };
-    const moved = dragRuptureEnd(EPICENTRE, rupture, "end", to);
+    const moved = dragRuptureEnd("unilateral", "end", EPICENTRE, to)!;
     const reference = inverse(EPICENTRE, to);
     expect(moved.epicentre).toEqual(EPICENTRE);
     expect(moved.lengthKm).toBeCloseTo(reference.km, 3);
@@ -39,13 +47,22 @@ describe("rupture trace on the ellipsoid (checked with GeographicLib)", () => {
   });
 
   it("dragging a bilateral start keeps the end and moves the epicentre to the middle", () => {
-    const rupture = { strikeDeg: 90, lengthKm: 60, mode: "bilateral" as const };
-    const { end } = ruptureTraceEnds(EPICENTRE, rupture);
+    const { end } = ruptureTraceEnds(EPICENTRE, { strikeDeg: 90, lengthKm: 60, mode: "bilateral" });
     const to = { lon: -127.0, lat: -47.2 };
-    const moved = dragRuptureEnd(EPICENTRE, rupture, "start", to);
+    const moved = dragRuptureEnd("bilateral", "start", end, to)!;
     expect(moved.lengthKm).toBeCloseTo(inverse(to, end).km, 3);
     expect(inverse(moved.epicentre, to).km).toBeCloseTo(moved.lengthKm / 2, 1);
     expect(inverse(moved.epicentre, end).km).toBeCloseTo(moved.lengthKm / 2, 1);
+  });
+
+  it("keeps the fixed end through many small steps with rounded form values (no drift)", () => {
+    let draft = applyDraftAction(BASE_DRAFT, { type: "set-rupture", rupture: { strikeDeg: 30, dipDeg: 80, lengthKm: 40, mode: "bilateral" } });
+    const { start } = ruptureTraceEnds(draft.source, { strikeDeg: 30, lengthKm: 40, mode: "bilateral" });
+    for (let i = 1; i <= 30; i++) draft = applyDraftAction(draft, { type: "drag-rupture-end", which: "end", fixed: start, to: { lon: -126.0 + i * 0.003, lat: -46.75 - i * 0.002 } });
+    const rupture = draft.source.rupture!;
+    const startNow = ruptureTraceEnds(draft.source, { strikeDeg: rupture.strikeDeg, lengthKm: rupture.lengthKm!, mode: "bilateral" }).start;
+    // One rounding's worth (length to 0.1 km: 0.05 km; strike to 0.1°: 0.05° over ~25 km ≈ 0.02 km; 4 decimals ≈ 0.01 km), not thirty.
+    expect(inverse(startNow, start).km).toBeLessThan(0.1);
   });
 });
 
