@@ -9,9 +9,9 @@ import { TextAreaField } from "@/components/ui/text-area-field";
 import { TextField } from "@/components/ui/text-field";
 import { scenarioVersionSchema, stationNetworkSchema } from "@/lib/api/contracts";
 import { fetchJson } from "@/lib/api/fetch-json";
+import { scenarioWrites } from "@/lib/api/scenario-writes";
 import { LAND_BOUNDS } from "@/lib/map/style";
 import { blankScenario } from "@/lib/workspace/blank-scenario";
-import { savedVersionSchema } from "@/lib/workspace/save-contracts";
 
 /** A scenario whose newest visible version can be copied. */
 export interface CopySource {
@@ -43,11 +43,7 @@ export function NewScenarioForm({ sources }: { sources: CopySource[] }) {
     mutationFn: async () => {
       const copyOf = sources.find((s) => String(s.id) === start);
       const scenario = await startingFile(name.trim(), copyOf);
-      return fetchJson("/api/scenarios", savedVersionSchema, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ name, ...(description.trim() ? { description } : {}), scenario }),
-      });
+      return scenarioWrites.create({ name, ...(description.trim() ? { description } : {}), scenario });
     },
     onSuccess: async (saved) => {
       await queryClient.invalidateQueries({ queryKey: ["scenarios"] });

@@ -6,9 +6,9 @@ import { useRouter } from "next/navigation";
 import { useDeferredValue, useMemo, useReducer, useState } from "react";
 import { LAYER_SWITCHES, type LayerSwitchId } from "@/components/map/result-layers";
 import type { ScenarioState } from "@/db/schema";
-import { fetchJson } from "@/lib/api/fetch-json";
 import { layerFeaturesQuery } from "@/lib/api/layer-queries";
 import { scenarioVersionQuery } from "@/lib/api/queries";
+import { scenarioWrites } from "@/lib/api/scenario-writes";
 import { describeProvenance, type Bbox, type IntensityScaleId } from "@/lib/geo";
 import { DEFAULT_CHANNELS, DEFAULT_WARNING_BREAKS_S } from "@/lib/scenario/defaults";
 import { parseScenario } from "@/lib/scenario/schema";
@@ -16,7 +16,6 @@ import { applyDraftAction, type ScenarioDraft } from "@/lib/workspace/draft";
 import { populationDensitySquares } from "@/lib/workspace/population-density";
 import { buildReplayModel, frontDistanceKm, frontRing, triggeredStations } from "@/lib/workspace/replay";
 import type { LonLat } from "@/lib/workspace/rupture-trace";
-import { savedVersionSchema } from "@/lib/workspace/save-contracts";
 import { useEngineClient, useEngineResults, useSiteResult } from "@/lib/workspace/use-engine-results";
 import { useUnsavedChangesGuard } from "@/lib/workspace/use-unsaved-changes-guard";
 import { AlertRulesForm, channelName } from "./alert-rules-form";
@@ -140,12 +139,7 @@ function WorkspaceEditor(props: ScenarioWorkspaceProps & { initial: ScenarioDraf
   }, [replayModel, replayTimeS]);
 
   const save = useMutation({
-    mutationFn: (note: string) =>
-      fetchJson(`/api/scenarios/${scenarioId}/versions`, savedVersionSchema, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ scenario: draft, basedOn: versionNumber, ...(note.trim() ? { note: note.trim() } : {}) }),
-      }),
+    mutationFn: (note: string) => scenarioWrites.saveVersion(scenarioId, { scenario: draft, basedOn: versionNumber, ...(note.trim() ? { note: note.trim() } : {}) }),
     onSuccess: async (saved) => {
       setSavedJson(JSON.stringify(draft));
       await queryClient.invalidateQueries({ queryKey: ["scenarios"] });
