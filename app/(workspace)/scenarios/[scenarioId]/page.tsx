@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { z } from "zod";
+import { ScenarioTabs } from "@/components/exposure/scenario-tabs";
 import { ScenarioExports } from "@/components/exports/scenario-exports";
 import { VersionVisibility } from "@/components/publishing/version-visibility";
 import { StateBadge } from "@/components/scenarios/state-badge";
@@ -89,6 +90,7 @@ export default async function ScenarioPage(props: {
           ))}
         </nav>
       )}
+      <ScenarioTabs scenarioId={scenario.id} versionNumber={version.number} current="map" />
       {can(user.role, "scenario:publish") && (
         <VersionVisibility scenarioId={scenario.id} versionNumber={version.number} state={version.state} councilMembers={councilMembers} />
       )}
