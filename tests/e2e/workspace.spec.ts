@@ -55,9 +55,9 @@ async function listScenarios(page: Page): Promise<ScenarioSummary[]> {
   return ((await (await page.request.get("/api/scenarios")).json()) as { scenarios: ScenarioSummary[] }).scenarios;
 }
 
-/** Puts the measured figure into docs/workspace.md between its markers (the README section). */
+/** Puts the measured figure into README.md between its markers ("Measured figures"). */
 function recordLongestTask(tasksMs: number[], dragMs: number, panTasksMs: number[]) {
-  const file = path.join("docs", "workspace.md");
+  const file = "README.md";
   const text = readFileSync(file, "utf8");
   const ms = Math.max(0, ...tasksMs);
   const line =

@@ -2,7 +2,7 @@ import "server-only";
 import { computeGridWith, describeProvenance, prepareEngine, resolveGridGeometry, traceContours, type ContourSet, type Engine, type EngineGrid, type Vs30Cells } from "@/lib/geo";
 import type { ExportSource } from "./export-source";
 
-/** Contours are traced on at most this many cells (the engine's contour limit, docs/engine.md). */
+/** Contours are traced on at most this many cells (the engine's contour limit, the README's engine section). */
 export const CONTOUR_MAX_CELLS = 1_000_000;
 
 /** A version computed on its scenario grid, with its contours. */

@@ -7,7 +7,7 @@ import { loadVs30Cells } from "@/lib/exports/server/export-source";
 import { downloadResponse } from "@/lib/exports/server/respond";
 
 /**
- * GET …/exports/scenario-file — the version as a self-contained scenario file (docs/engine.md's
+ * GET …/exports/scenario-file — the version as a self-contained scenario file (the README's
  * format) for re-import or the CLI: the site-condition layer written in as `vs30Grid`, the
  * workspace's intensity scale written in when the version names none.
  */
