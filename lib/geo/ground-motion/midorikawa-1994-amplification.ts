@@ -1,9 +1,8 @@
 /**
  * Amplification of PGV by the ground above engineering bedrock, from Vs30.
  *
- * Midorikawa, S., Matsuoka, M. & Sakugawa, K. (1994), Site effects on strong-motion records
- * observed during the 1987 Chiba-ken-toho-oki, Japan earthquake, Proc. 9th Japan Earthquake
- * Engineering Symposium 3, 85–90:
+ * Midorikawa, S., Matsuoka, M. & Sakugawa, K. (1994), site effects on strong-motion records of a
+ * 1987 earthquake, Proc. 9th Japan Earthquake Engineering Symposium 3, 85–90:
  *
  *     log ARV = 1.83 − 0.66·log Vs30        (100 ≤ Vs30 ≤ 1500 m/s)
  *
