@@ -6,18 +6,15 @@
  * `totalPopulation` = round(Σ population). "Who can act" columns count alerted people only.
  */
 import type { Scenario } from "@/lib/scenario/schema";
-import { havLongitude, lambertDistanceFromTermsKm, lambertLatitudeTerms, type LambertLatitudeTerms } from "./distance";
+import { walkCells } from "./cell-walk";
 import { prepareEngine, type Engine, type EngineOptions } from "./engine";
 import type { IntensityScaleId } from "./intensity/scales";
-import { createPlaceValues, evaluateAlert, evaluateShaking, pExceedTarget, type PlaceValues } from "./place";
+import { pExceedTarget, type PlaceValues } from "./place";
 import { CAUTION, type Provenance } from "./provenance";
 import { roundLargestRemainder } from "./rounding";
 import { ALERT_STRATEGY_IDS, type AlertStrategyId } from "./strategy/ids";
 import { probabilityOfExceedance } from "./uncertainty";
 import { NO_ALERT_BAND, warningBandIndex, warningBands, type WarningBand } from "./warning";
-import { reducedLatitudeRad } from "./wgs84";
-
-const DEG = Math.PI / 180;
 
 /** Population cells as parallel arrays: centres in degrees, people ≥ 0, optional district index (−1: none). */
 export interface PopulationCells {
@@ -163,69 +160,41 @@ export function computeExposureWith(engine: Engine, cells: PopulationCells, opti
   const mw = engine.scenario.source.mw;
   const magnitudeDiffers = engine.strategy.id === "source" && engine.strategy.updates.some((u) => u.mw !== mw);
   const bounds = engine.scale.classLowerBounds;
-  const { lon: lon0, lat: lat0 } = engine.scenario.source;
-  const originBeta = reducedLatitudeRad(lat0);
-  const sinB1 = Math.sin(originBeta);
-  const cosB1 = Math.cos(originBeta);
-  const needsFrame = engine.source.needsLocalFrame;
-  const evaluator = engine.strategy.forPoints();
-  const v = createPlaceValues();
-  // Population cells usually come row by row: reuse the latitude terms while the latitude repeats.
-  let lastLat = Number.NaN;
-  let terms: LambertLatitudeTerms = lambertLatitudeTerms(originBeta, 0);
-  let sinB2 = 0;
-  let cosB2 = 1;
   let total = 0;
-  for (let i = 0; i < cells.population.length; i++) {
-    const people = cells.population[i];
-    if (!(people > 0)) continue;
-    total += people;
-    const lon = cells.lon[i];
-    const lat = cells.lat[i];
-    if (lat !== lastLat) {
-      terms = lambertLatitudeTerms(originBeta, lat);
-      const beta = reducedLatitudeRad(lat);
-      sinB2 = Math.sin(beta);
-      cosB2 = Math.cos(beta);
-      lastLat = lat;
-    }
-    const epicentralKm = lambertDistanceFromTermsKm(terms, havLongitude(lon - lon0));
-    let eastKm = 0;
-    let northKm = 0;
-    if (needsFrame && epicentralKm > 0) {
-      const dLon = (lon - lon0) * DEG;
-      const e = Math.sin(dLon) * cosB2;
-      const n = cosB1 * sinB2 - sinB1 * cosB2 * Math.cos(dLon);
-      const norm = Math.hypot(e, n);
-      eastKm = (epicentralKm * e) / norm;
-      northKm = (epicentralKm * n) / norm;
-    }
-    evaluateShaking(engine, epicentralKm, eastKm, northKm, engine.vs30.vs30At(lon, lat), v);
-    evaluateAlert(engine, evaluator, i, lon, lat, v);
-    const alerted = v.alert.alerted ? 1 : 0;
-    const district = cells.district ? cells.district[i] : -1;
-    const districtSlot = district >= 0 && district < districtNames.length ? district + 1 : 0;
-    const classIndex = engine.scale.classIndex(v.intensity);
-    for (let k = 0; k < channels.length; k++) {
-      const band = warningBandIndex(v.warningS + offsets[k], breaks);
-      const slot = band < 0 ? bands.length : band;
-      if (k === 0) t.joint[((districtSlot * classes.length + classIndex) * bandSlots + slot) * 2 + alerted] += people;
-      t.channels[(k * bandSlots + slot) * 2 + alerted] += people;
-    }
-    if (alerted) for (let a = 0; a < actions.length; a++) if (v.warningS >= reactionS + actions[a].seconds) t.actions[a] += people;
-    const p = pExceedTarget(engine, v);
-    if (alerted) {
-      t.needless += people * (1 - p);
-      if (v.warningS <= 0) t.late += people * p;
-      if (magnitudeDiffers) {
-        const predictedClass = engine.scale.classIndex(v.alert.predictedIntensity);
-        const lower = predictedClass >= 2 ? bounds[predictedClass - 2] : -Infinity;
-        const upper = predictedClass + 1 < bounds.length ? bounds[predictedClass + 1] : Infinity;
-        t.withinOneClass += people * (exceedance(engine, v, lower) - exceedance(engine, v, upper));
-        t.withinOneClassOf += people;
+  // Cells without people are skipped: they add nothing to any table.
+  walkCells(
+    engine,
+    cells.lon,
+    cells.lat,
+    (i, v) => {
+      const people = cells.population[i];
+      total += people;
+      const alerted = v.alert.alerted ? 1 : 0;
+      const district = cells.district ? cells.district[i] : -1;
+      const districtSlot = district >= 0 && district < districtNames.length ? district + 1 : 0;
+      const classIndex = engine.scale.classIndex(v.intensity);
+      for (let k = 0; k < channels.length; k++) {
+        const band = warningBandIndex(v.warningS + offsets[k], breaks);
+        const slot = band < 0 ? bands.length : band;
+        if (k === 0) t.joint[((districtSlot * classes.length + classIndex) * bandSlots + slot) * 2 + alerted] += people;
+        t.channels[(k * bandSlots + slot) * 2 + alerted] += people;
       }
-    } else t.missed += people * p;
-  }
+      if (alerted) for (let a = 0; a < actions.length; a++) if (v.warningS >= reactionS + actions[a].seconds) t.actions[a] += people;
+      const p = pExceedTarget(engine, v);
+      if (alerted) {
+        t.needless += people * (1 - p);
+        if (v.warningS <= 0) t.late += people * p;
+        if (magnitudeDiffers) {
+          const predictedClass = engine.scale.classIndex(v.alert.predictedIntensity);
+          const lower = predictedClass >= 2 ? bounds[predictedClass - 2] : -Infinity;
+          const upper = predictedClass + 1 < bounds.length ? bounds[predictedClass + 1] : Infinity;
+          t.withinOneClass += people * (exceedance(engine, v, lower) - exceedance(engine, v, upper));
+          t.withinOneClassOf += people;
+        }
+      } else t.missed += people * p;
+    },
+    (i) => cells.population[i] > 0,
+  );
   return summarize(engine, t, Math.round(total), { bands, classes, districtNames, actions });
 }
 
