@@ -31,3 +31,16 @@ test("scenario list, one version and the station network come from the API", asy
   const stations = await (await page.request.get("/api/stations")).json();
   expect(stations.stations.length).toBeGreaterThanOrEqual(24);
 });
+
+test("pages carry a Content-Security-Policy that names only this server (plus a nonce for Next's scripts)", async ({ page }) => {
+  const response = await page.goto("/sign-in");
+  const csp = response?.headers()["content-security-policy"] ?? "";
+  const directives = new Map(csp.split(";").map((d) => d.trim().split(/\s+/)).map(([name, ...sources]) => [name, sources]));
+  for (const name of ["style-src", "img-src", "font-src", "worker-src", "connect-src"]) {
+    expect(directives.get(name), name).toEqual(["'self'"]);
+  }
+  const scripts = directives.get("script-src") ?? [];
+  expect(scripts.filter((s) => !s.startsWith("'nonce-"))).toEqual(["'self'", "'strict-dynamic'"]);
+  expect(scripts.some((s) => s.startsWith("'nonce-"))).toBe(true);
+  expect(directives.get("default-src")).toEqual(["'self'"]);
+});
