@@ -13,6 +13,7 @@ import { scenarios, scenarioVersions, users } from "@/db/schema";
 import { everyone, fromBrief, signedIn, type Expectation } from "./brief-roles";
 import { comparableVersions, computableVersion } from "../exposure/fixture";
 import { readLayerFile } from "@/lib/layers/read-layer-file";
+import { fixtureScenarioFile } from "../support/scenario-file";
 
 export interface RouteCase {
   /** Shown in the test name when a row has several cases. */
@@ -57,17 +58,7 @@ async function newPasswordForm(kind: "invite" | "reset") {
 }
 
 /** A complete scenario file (the fixture's source and stations plus site conditions and an area), for the writing routes. */
-const MATRIX_SCENARIO_FILE = {
-  version: 1,
-  name: "Matrix scenario",
-  source: { lon: 150.2, lat: -30.1, depthKm: 20, mw: 7.1, faultType: "crustal" },
-  stations: [
-    { id: "S1", lon: 150.0, lat: -30.0 },
-    { id: "S2", lon: 150.4, lat: -30.2 },
-  ],
-  vs30: 400,
-  area: { bbox: [149.5, -30.6, 150.9, -29.6], cellKm: 5 },
-};
+const MATRIX_SCENARIO_FILE = fixtureScenarioFile("Matrix scenario");
 
 /** A version of the fixture's scenario holding a complete scenario file and the fixture's population layer, for the export routes. */
 async function exportableVersion(fixture: Fixture, state: "shared" | "published") {

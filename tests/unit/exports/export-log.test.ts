@@ -4,18 +4,9 @@ import { app, type Fixture } from "../support/app";
 import { beforeEach, describe, expect, it } from "vitest";
 import { exportLog, scenarioVersions } from "@/db/schema";
 import { getExport } from "./export-routes";
+import { fixtureScenarioFile } from "../support/scenario-file";
 
-const SCENARIO_FILE = {
-  version: 1,
-  name: "Log test",
-  source: { lon: 150.2, lat: -30.1, depthKm: 20, mw: 7.1, faultType: "crustal" },
-  stations: [
-    { id: "S1", lon: 150.0, lat: -30.0 },
-    { id: "S2", lon: 150.4, lat: -30.2 },
-  ],
-  vs30: 400,
-  area: { bbox: [149.5, -30.6, 150.9, -29.6], cellKm: 5 },
-};
+const SCENARIO_FILE = fixtureScenarioFile("Log test");
 
 async function addVersion(fixture: Fixture, params: unknown, state: "shared" | "published" = "shared") {
   const [row] = await app.db

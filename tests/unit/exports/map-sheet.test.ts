@@ -13,6 +13,7 @@ import type { MapSheetView } from "@/lib/exports/map-sheet/sheet-request";
 import { pngSize } from "@/lib/exports/map-sheet/png-size";
 import { solidPng } from "./make-png";
 import { readPdf, type PdfPageText } from "./read-pdf";
+import { fixtureScenarioFile } from "../support/scenario-file";
 
 describe("the scale bar's arithmetic", () => {
   it.each([0, 30, 45, 60])("a degree of longitude at %i° matches GeographicLib's distance along the parallel to 0.01 %", (lat) => {
@@ -38,17 +39,7 @@ describe("the scale bar's arithmetic", () => {
   });
 });
 
-const SCENARIO_FILE = {
-  version: 1,
-  name: "Sheet test",
-  source: { lon: 150.2, lat: -30.1, depthKm: 15, mw: 7.0, faultType: "crustal" },
-  stations: [
-    { id: "S1", lon: 150.0, lat: -30.0 },
-    { id: "S2", lon: 150.4, lat: -30.2 },
-  ],
-  vs30: 400,
-  area: { bbox: [149.5, -30.6, 150.9, -29.6], cellKm: 5 },
-};
+const SCENARIO_FILE = fixtureScenarioFile("Sheet test", { depthKm: 15, mw: 7.0 });
 
 /** A view like the browser's: centre, zoom and the bounds that zoom gives the frame in Web Mercator. */
 function viewFor(paper: "a4" | "a3", orientation: "portrait" | "landscape", format: "pdf" | "png"): MapSheetView {
