@@ -1,3 +1,5 @@
+import { SwatchLegendItem } from "./swatch-legend-item";
+
 /** A district outline in GeoJSON coordinates (lon, lat degrees). */
 export interface DistrictShape {
   name: string;
@@ -103,12 +105,7 @@ export function DistrictMap({
       <figcaption>
         <ul className="flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink">
           {classes.map((c) => (
-            <li key={c.label} className="flex items-center gap-1.5">
-              <svg aria-hidden="true" width="12" height="12">
-                <rect x="0.5" y="0.5" width="11" height="11" rx="2" fill={c.colour} className="stroke-line-strong" />
-              </svg>
-              {c.label}
-            </li>
+            <SwatchLegendItem key={c.label} colour={c.colour} label={c.label} />
           ))}
         </ul>
       </figcaption>

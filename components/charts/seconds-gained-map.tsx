@@ -1,6 +1,7 @@
 import type { SecondsGained } from "@/lib/exposure/contracts";
 import { SECONDS_GAINED_LEGEND } from "@/lib/exposure/seconds-gained";
 import type { DistrictShape } from "./district-map";
+import { SwatchLegendItem } from "./swatch-legend-item";
 
 const WIDTH = 560;
 const PAD = 10;
@@ -34,12 +35,7 @@ export function SecondsGainedMap({ layer, districts, bbox, testId }: { layer: Se
       <figcaption>
         <ul className="flex flex-wrap gap-x-4 gap-y-1 text-xs text-ink">
           {SECONDS_GAINED_LEGEND.map((band) => (
-            <li key={band.label} className="flex items-center gap-1.5">
-              <svg aria-hidden="true" width="12" height="12">
-                <rect x="0.5" y="0.5" width="11" height="11" rx="2" fill={band.colour} className="stroke-line-strong" />
-              </svg>
-              {band.label}
-            </li>
+            <SwatchLegendItem key={band.label} colour={band.colour} label={band.label} />
           ))}
           <li>unshaded: within 1 s of A</li>
         </ul>

@@ -1,5 +1,6 @@
 import { scaleBand, scaleLinear } from "d3-scale";
 import { ChartFrame, type ChartBox } from "./chart-frame";
+import { SwatchLegendItem } from "./swatch-legend-item";
 
 /** One stack segment's series: its label, fill and the value per category. */
 export interface StackSeries {
@@ -37,12 +38,7 @@ export function StackedBarChart({
   const x = scaleBand<number>().domain(categories.map((_, c) => c)).range([MARGIN.left, WIDTH - MARGIN.right]).padding(0.25);
   const y = scaleLinear().domain([0, Math.max(1, ...totals)]).nice().range([HEIGHT - MARGIN.bottom, MARGIN.top]);
   const legend = series.map((s) => (
-    <li key={s.key} className="flex items-center gap-1.5">
-      <svg aria-hidden="true" width="12" height="12">
-        <rect x="0.5" y="0.5" width="11" height="11" rx="2" fill={s.colour} className="stroke-line-strong" />
-      </svg>
-      {s.label}
-    </li>
+    <SwatchLegendItem key={s.key} colour={s.colour} label={s.label} />
   ));
 
   return (
