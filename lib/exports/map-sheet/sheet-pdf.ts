@@ -27,6 +27,19 @@ export async function createSheetDocument(readFont: (file: string) => Promise<Ui
 
 const paintOf = (p: Paint | undefined) => (p ? { color: colour(p.hex), opacity: p.opacity ?? 1 } : undefined);
 
+/** pdf-lib's fill and border options for a filled and/or stroked shape (no stroke: no border). */
+function shapePaint(shape: { fill?: Paint; stroke?: Paint; strokeWidthPt?: number }) {
+  const fill = paintOf(shape.fill);
+  const stroke = paintOf(shape.stroke);
+  return {
+    color: fill?.color,
+    opacity: fill?.opacity,
+    borderColor: stroke?.color,
+    borderOpacity: stroke?.opacity,
+    borderWidth: stroke ? (shape.strokeWidthPt ?? 0.5) : 0,
+  };
+}
+
 /** Draws the sheet on a new page of `doc` and returns the PDF's bytes. */
 export async function paintSheetPdf(doc: PDFDocument, fonts: PdfFonts, drawing: SheetDrawing, mapPng: Uint8Array, createdAt: Date): Promise<Uint8Array> {
   doc.setTitle(drawing.title);
@@ -45,40 +58,15 @@ export async function paintSheetPdf(doc: PDFDocument, fonts: PdfFonts, drawing: 
       case "text":
         page.drawText(p.text, { x: p.xPt, y: p.yPt, size: p.sizePt, font: fonts[p.weight], color: colour(p.colour) });
         break;
-      case "rect": {
-        const fill = paintOf(p.fill);
-        const stroke = paintOf(p.stroke);
-        page.drawRectangle({
-          x: p.xPt,
-          y: p.yPt,
-          width: p.widthPt,
-          height: p.heightPt,
-          color: fill?.color,
-          opacity: fill?.opacity,
-          borderColor: stroke?.color,
-          borderOpacity: stroke?.opacity,
-          borderWidth: stroke ? (p.strokeWidthPt ?? 0.5) : 0,
-        });
+      case "rect":
+        page.drawRectangle({ x: p.xPt, y: p.yPt, width: p.widthPt, height: p.heightPt, ...shapePaint(p) });
         break;
-      }
       case "line":
         page.drawLine({ start: { x: p.x1Pt, y: p.y1Pt }, end: { x: p.x2Pt, y: p.y2Pt }, thickness: p.widthPt, color: colour(p.colour), dashArray: p.dashPt });
         break;
-      case "circle": {
-        const fill = paintOf(p.fill);
-        const stroke = paintOf(p.stroke);
-        page.drawCircle({
-          x: p.xPt,
-          y: p.yPt,
-          size: p.radiusPt,
-          color: fill?.color,
-          opacity: fill?.opacity,
-          borderColor: stroke?.color,
-          borderOpacity: stroke?.opacity,
-          borderWidth: stroke ? (p.strokeWidthPt ?? 0.5) : 0,
-        });
+      case "circle":
+        page.drawCircle({ x: p.xPt, y: p.yPt, size: p.radiusPt, ...shapePaint(p) });
         break;
-      }
       case "polygon": {
         // pdf-lib's SVG paths run with y down from the given origin: flip about the page's top.
         const [first, ...rest] = p.pointsPt;
