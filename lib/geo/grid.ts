@@ -17,8 +17,14 @@ import { reducedLatitudeRad } from "./wgs84";
 
 const DEG = Math.PI / 180;
 
+/** What `computeGridWith` may leave out. */
+export interface GridFieldOptions {
+  /** PGA and P(exceed target) per cell (default true). Map previews skip them: the site card asks for its point on its own. */
+  detail?: boolean;
+}
+
 /** Options for `computeGrid` and `summarizeGrid`. */
-export interface GridOptions extends EngineOptions {
+export interface GridOptions extends EngineOptions, GridFieldOptions {
   /** Cell size, km (default the scenario's `area.cellKm`). */
   cellKm?: number;
   /** Area [west, south, east, north] (default the scenario's `area.bbox`). */
@@ -216,77 +222,92 @@ function sweepGrid(engine: Engine, geometry: GridGeometry, withDetail: boolean, 
   }
 }
 
-/** Accumulates the summary from row buffers. */
-function summaryAccumulator(engine: Engine, geometry: GridGeometry) {
-  const channels = engine.timeline.channels;
-  const primaryDeliveryS = channels[0].deliveryS;
-  const channelLimits = channels.map((c) => c.deliveryS - primaryDeliveryS);
-  const channelBlind = new Float64Array(channels.length);
-  let blind = 0;
-  let alertArea = 0;
-  let firstAlertArea = 0;
-  const firstUpdate = engine.strategy.firstUpdateIndex;
-  let noAlert = 0;
-  let minWarning = Infinity;
-  let maxWarning = -Infinity;
-  let alertedMaxWarning = -Infinity;
-  let maxIntensity = -Infinity;
-  let maxLog10Pgv = -Infinity;
-  let extrapolatedCells = 0;
-  return {
-    add(row: number, b: RowBuffers) {
-      const area = cellAreaKm2(geometry, row);
-      for (let c = 0; c < geometry.width; c++) {
-        const w = b.warningS[c];
-        if (Number.isNaN(w)) noAlert += area;
-        else {
-          if (w <= 0) blind += area;
-          if (w < minWarning) minWarning = w;
-          if (w > maxWarning) maxWarning = w;
-          for (let k = 0; k < channelLimits.length; k++) if (w <= channelLimits[k]) channelBlind[k] += area;
-        }
-        if (b.alerted[c]) {
-          alertArea += area;
-          if (b.updateIndex[c] === firstUpdate) firstAlertArea += area;
-          if (w > alertedMaxWarning) alertedMaxWarning = w;
-        }
-        if (b.intensity[c] > maxIntensity) maxIntensity = b.intensity[c];
-        if (b.log10Pgv[c] > maxLog10Pgv) maxLog10Pgv = b.log10Pgv[c];
-        extrapolatedCells += b.extrapolated[c];
+/**
+ * Accumulates the summary from row buffers. Running totals are fields of a class rather than
+ * variables captured by a closure: V8 updates double fields in place but boxes every new value
+ * written to a captured variable, which cost a fresh allocation per cell.
+ */
+class SummaryAccumulator {
+  private readonly channelLimits: number[];
+  private readonly channelBlind: Float64Array;
+  private readonly firstUpdate: number;
+  private blind = 0;
+  private alertArea = 0;
+  private firstAlertArea = 0;
+  private noAlert = 0;
+  private minWarning = Infinity;
+  private maxWarning = -Infinity;
+  private alertedMaxWarning = -Infinity;
+  private maxIntensity = -Infinity;
+  private maxLog10Pgv = -Infinity;
+  private extrapolatedCells = 0;
+
+  constructor(
+    private readonly engine: Engine,
+    private readonly geometry: GridGeometry,
+  ) {
+    const channels = engine.timeline.channels;
+    this.channelLimits = channels.map((c) => c.deliveryS - channels[0].deliveryS);
+    this.channelBlind = new Float64Array(channels.length);
+    this.firstUpdate = engine.strategy.firstUpdateIndex;
+  }
+
+  add(row: number, b: RowBuffers): void {
+    const area = cellAreaKm2(this.geometry, row);
+    const limits = this.channelLimits;
+    for (let c = 0; c < this.geometry.width; c++) {
+      const w = b.warningS[c];
+      if (Number.isNaN(w)) this.noAlert += area;
+      else {
+        if (w <= 0) this.blind += area;
+        if (w < this.minWarning) this.minWarning = w;
+        if (w > this.maxWarning) this.maxWarning = w;
+        for (let k = 0; k < limits.length; k++) if (w <= limits[k]) this.channelBlind[k] += area;
       }
-    },
-    finish(): GridSummary {
-      const finiteOrNull = (x: number) => (Number.isFinite(x) ? x : null);
-      return {
-        cells: geometry.width * geometry.height,
-        width: geometry.width,
-        height: geometry.height,
-        cellKm: geometry.cellKm,
-        bbox: geometry.bbox,
-        blindZoneAreaKm2: blind,
-        alertAreaKm2: alertArea,
-        firstAlertAreaKm2: firstAlertArea,
-        alertUpdates: engine.strategy.updates.map((u) => ({ issueS: u.issueS, mw: Number.isNaN(u.mw) ? null : u.mw })),
-        noAlertAreaKm2: noAlert,
-        minWarningS: finiteOrNull(minWarning),
-        maxWarningS: finiteOrNull(maxWarning),
-        alertedMaxWarningS: finiteOrNull(alertedMaxWarning),
-        maxIntensity,
-        maxJmaIntensity: jmaIntensityFromLog10Pgv(maxLog10Pgv),
-        maxMmi: mmiFromLog10Pgv(maxLog10Pgv),
-        maxPgvCms: 10 ** maxLog10Pgv,
-        alertIssued: engine.strategy.issued,
-        alertIssuedS: engine.strategy.issued ? engine.strategy.firstIssueS : null,
-        detectionS: engine.timeline.detectionS,
-        extrapolatedCells,
-        byChannel: channels.map((c, k) => ({ channel: c.id, deliveryS: c.deliveryS, blindZoneAreaKm2: channelBlind[k] })),
-      };
-    },
-  };
+      if (b.alerted[c]) {
+        this.alertArea += area;
+        if (b.updateIndex[c] === this.firstUpdate) this.firstAlertArea += area;
+        if (w > this.alertedMaxWarning) this.alertedMaxWarning = w;
+      }
+      if (b.intensity[c] > this.maxIntensity) this.maxIntensity = b.intensity[c];
+      if (b.log10Pgv[c] > this.maxLog10Pgv) this.maxLog10Pgv = b.log10Pgv[c];
+      this.extrapolatedCells += b.extrapolated[c];
+    }
+  }
+
+  finish(): GridSummary {
+    const { engine, geometry } = this;
+    const channels = engine.timeline.channels;
+    const finiteOrNull = (x: number) => (Number.isFinite(x) ? x : null);
+    return {
+      cells: geometry.width * geometry.height,
+      width: geometry.width,
+      height: geometry.height,
+      cellKm: geometry.cellKm,
+      bbox: geometry.bbox,
+      blindZoneAreaKm2: this.blind,
+      alertAreaKm2: this.alertArea,
+      firstAlertAreaKm2: this.firstAlertArea,
+      alertUpdates: engine.strategy.updates.map((u) => ({ issueS: u.issueS, mw: Number.isNaN(u.mw) ? null : u.mw })),
+      noAlertAreaKm2: this.noAlert,
+      minWarningS: finiteOrNull(this.minWarning),
+      maxWarningS: finiteOrNull(this.maxWarning),
+      alertedMaxWarningS: finiteOrNull(this.alertedMaxWarning),
+      maxIntensity: this.maxIntensity,
+      maxJmaIntensity: jmaIntensityFromLog10Pgv(this.maxLog10Pgv),
+      maxMmi: mmiFromLog10Pgv(this.maxLog10Pgv),
+      maxPgvCms: 10 ** this.maxLog10Pgv,
+      alertIssued: engine.strategy.issued,
+      alertIssuedS: engine.strategy.issued ? engine.strategy.firstIssueS : null,
+      detectionS: engine.timeline.detectionS,
+      extrapolatedCells: this.extrapolatedCells,
+      byChannel: channels.map((c, k) => ({ channel: c.id, deliveryS: c.deliveryS, blindZoneAreaKm2: this.channelBlind[k] })),
+    };
+  }
 }
 
-/** Computes every field of the grid with an engine already prepared for the scenario. */
-export function computeGridWith(engine: Engine, geometry: GridGeometry): { grid: EngineGrid; summary: GridSummary } {
+/** Computes the fields of the grid with an engine already prepared for the scenario (without detail, PGA and P(exceed) are NaN). */
+export function computeGridWith(engine: Engine, geometry: GridGeometry, { detail = true }: GridFieldOptions = {}): { grid: EngineGrid; summary: GridSummary } {
   const { width, height } = geometry;
   const cells = width * height;
   const f32 = () => new Float32Array(cells);
@@ -306,9 +327,13 @@ export function computeGridWith(engine: Engine, geometry: GridGeometry): { grid:
     areaAt: engine.scenario.alert.areaAt,
     channels: engine.timeline.channels.map((c) => ({ id: c.id, deliveryS: c.deliveryS, offsetS: primaryDeliveryS - c.deliveryS })),
   };
-  const summary = summaryAccumulator(engine, geometry);
+  const summary = new SummaryAccumulator(engine, geometry);
   const classIndex = engine.scale.classIndex;
-  sweepGrid(engine, geometry, true, (row, b) => {
+  if (!detail) {
+    grid.pgaCms2.fill(Number.NaN);
+    grid.pExceedTarget.fill(Number.NaN);
+  }
+  sweepGrid(engine, geometry, detail, (row, b) => {
     summary.add(row, b);
     const offset = row * width;
     for (let c = 0; c < width; c++) {
@@ -319,12 +344,16 @@ export function computeGridWith(engine: Engine, geometry: GridGeometry): { grid:
       grid.alertS[i] = b.issueS[c] + primaryDeliveryS;
       grid.warningS[i] = b.warningS[c];
       grid.pgvCms[i] = 10 ** b.log10Pgv[c];
-      grid.pgaCms2[i] = 10 ** b.log10Pga[c];
       grid.intensity[i] = b.intensity[c];
       grid.intensityClass[i] = classIndex(b.intensity[c]);
       grid.alerted[i] = b.alerted[c];
       grid.extrapolated[i] = b.extrapolated[c];
-      grid.pExceedTarget[i] = b.pExceed[c];
+    }
+    if (detail) {
+      for (let c = 0; c < width; c++) {
+        grid.pgaCms2[offset + c] = 10 ** b.log10Pga[c];
+        grid.pExceedTarget[offset + c] = b.pExceed[c];
+      }
     }
   });
   return { grid, summary: summary.finish() };
@@ -333,13 +362,13 @@ export function computeGridWith(engine: Engine, geometry: GridGeometry): { grid:
 /** The scenario on a grid: every field in typed arrays, with the summary, notes, caution and provenance. */
 export function computeGrid(scenario: Scenario, options: GridOptions = {}): GridResult {
   const engine = prepareEngine(scenario, options);
-  const { grid, summary } = computeGridWith(engine, resolveGridGeometry(scenario, options));
+  const { grid, summary } = computeGridWith(engine, resolveGridGeometry(scenario, options), options);
   return { grid, summary, notes: engine.notes, caution: CAUTION, provenance: engine.provenance };
 }
 
 /** The summary alone, computed row by row (flat memory; for grids too large to keep). */
 export function summarizeGridWith(engine: Engine, geometry: GridGeometry): GridSummary {
-  const summary = summaryAccumulator(engine, geometry);
+  const summary = new SummaryAccumulator(engine, geometry);
   sweepGrid(engine, geometry, false, (row, b) => summary.add(row, b));
   return summary.finish();
 }

@@ -4,7 +4,7 @@
  * the same point and distance.
  */
 import type { Engine, ShakingEngine } from "./engine";
-import { createSourceDistances, type SourceDistances } from "./source/types";
+import type { SourceDistances } from "./source/types";
 import { createPlaceAlert, type PlaceAlert, type PlaceAlertEvaluator, type PlaceContext } from "./strategy/types";
 import { probabilityOfExceedance } from "./uncertainty";
 
@@ -36,27 +36,33 @@ export interface PlaceValues extends SourceDistances, PlaceContext {
   warningS: number;
 }
 
-/** A zeroed `PlaceValues` to reuse in loops. */
+/** A blank `PlaceValues` to reuse in loops (numbers start as NaN for the reason given at `createSourceDistances`). */
 export function createPlaceValues(): PlaceValues {
+  const nan = Number.NaN;
   return {
-    ...createSourceDistances(),
-    lonDeg: 0,
-    latDeg: 0,
-    epicentralKm: 0,
-    eastKm: 0,
-    northKm: 0,
-    modelDistanceKm: 0,
-    pArrivalS: 0,
-    sArrivalS: 0,
-    peakShakingS: 0,
+    hypocentralKm: nan,
+    ruptureKm: nan,
+    joynerBooreKm: nan,
+    ruptureTimeS: nan,
+    nearestDepthKm: nan,
+    nearestHorizontalKm: nan,
+    lonDeg: nan,
+    latDeg: nan,
+    epicentralKm: nan,
+    eastKm: nan,
+    northKm: nan,
+    modelDistanceKm: nan,
+    pArrivalS: nan,
+    sArrivalS: nan,
+    peakShakingS: nan,
     sIsHeadWave: false,
-    vs30Ms: 0,
-    log10PgvCms: 0,
-    intensity: 0,
+    vs30Ms: nan,
+    log10PgvCms: nan,
+    intensity: nan,
     extrapolated: false,
     alert: createPlaceAlert(),
-    alertS: Number.NaN,
-    warningS: Number.NaN,
+    alertS: nan,
+    warningS: nan,
   };
 }
 

@@ -89,6 +89,8 @@ export function useEngineResults(
       cellKm: geometry.cellKm,
       maxCells: geometry.maxCells,
       contours: true,
+      // A preview lasts one frame of a drag, and the site card asks for its own point: no PGA or P(exceed).
+      detail: kind === "full",
       computedAt: new Date().toISOString(),
       scenarioVersion: contextRef.current.scenarioVersion,
       layerVersions: contextRef.current.layerVersions,

@@ -28,7 +28,11 @@ export interface SourceGeometry {
   measure(epicentralKm: number, eastKm: number, northKm: number, out: SourceDistances): void;
 }
 
-/** A zeroed `SourceDistances` to reuse in loops. */
+/**
+ * A blank `SourceDistances` to reuse in loops. Fields start as NaN, not 0, so the engine's hot loops
+ * see double fields from the first write on (V8 then updates them in place instead of boxing each value).
+ */
 export function createSourceDistances(): SourceDistances {
-  return { hypocentralKm: 0, ruptureKm: 0, joynerBooreKm: 0, ruptureTimeS: 0, nearestDepthKm: 0, nearestHorizontalKm: 0 };
+  const nan = Number.NaN;
+  return { hypocentralKm: nan, ruptureKm: nan, joynerBooreKm: nan, ruptureTimeS: nan, nearestDepthKm: nan, nearestHorizontalKm: nan };
 }

@@ -30,6 +30,8 @@ const requestSchema = z.discriminatedUnion("kind", [
     /** Default PREVIEW_MAX_CELLS. */
     maxCells: z.number().int().positive().optional(),
     contours: z.boolean().optional(),
+    /** PGA and P(exceed) per cell (default true; previews send false). */
+    detail: z.boolean().optional(),
   }),
   z.object({
     kind: z.literal("sites"),
@@ -71,7 +73,7 @@ export function handleEngineMessage(message: unknown): { response: EngineRespons
     const result = computeSites(parsed.scenario, r.sites, provenance);
     return { response: { id: r.id, kind: "sites", ok: true, ...result }, transfer: [] };
   }
-  const result = computeGrid(parsed.scenario, { ...provenance, cellKm: r.cellKm, bbox: r.bbox, maxCells: r.maxCells ?? PREVIEW_MAX_CELLS });
+  const result = computeGrid(parsed.scenario, { ...provenance, cellKm: r.cellKm, bbox: r.bbox, maxCells: r.maxCells ?? PREVIEW_MAX_CELLS, detail: r.detail });
   const contours = r.contours === false ? null : traceContours(result.grid);
   return { response: { id: r.id, kind: "grid", ok: true, ...result, contours }, transfer: gridBuffers(result.grid) };
 }

@@ -39,7 +39,7 @@ async function msPerUpdate(worker: Worker, velocity: "iasp91" | "homogeneous"): 
     const start = performance.now();
     for (let step = 0; step < UPDATES; step++) {
       const source = { ...scenario.source, lon: scenario.source.lon + step * 0.006 };
-      const response = await ask(worker, { id: ++id, kind: "grid", scenario: { ...scenario, source }, bbox: area.bbox, cellKm: area.cellKm, maxCells: PREVIEW_SIDE * PREVIEW_SIDE, contours: true } as { id: number });
+      const response = await ask(worker, { id: ++id, kind: "grid", scenario: { ...scenario, source }, bbox: area.bbox, cellKm: area.cellKm, maxCells: PREVIEW_SIDE * PREVIEW_SIDE, contours: true, detail: false } as { id: number });
       if (!response.ok) throw new Error(`the worker refused the benchmark scenario: ${JSON.stringify(response)}`);
     }
     return (performance.now() - start) / UPDATES;

@@ -80,6 +80,20 @@ describe("worker message handler", () => {
     expect(transfer).toContain(response.grid.warningS.buffer);
   });
 
+  it("a preview may leave out PGA and P(exceed), changing nothing else", () => {
+    const scenario = homogeneousScenario();
+    const full = handleEngineMessage({ id: 1, kind: "grid", scenario, cellKm: 1 }).response;
+    const preview = handleEngineMessage({ id: 2, kind: "grid", scenario, cellKm: 1, detail: false }).response;
+    if (full.kind !== "grid" || preview.kind !== "grid") throw new Error("grid responses expected");
+    expect(preview.contours).toEqual(full.contours);
+    expect(preview.grid.warningS).toEqual(full.grid.warningS);
+    expect(preview.grid.intensity).toEqual(full.grid.intensity);
+    expect(preview.summary).toEqual(full.summary);
+    expect(Number.isNaN(preview.grid.pgaCms2[0]) && Number.isNaN(preview.grid.pExceedTarget[0])).toBe(true);
+    expect(full.grid.pgaCms2[0]).toBeGreaterThan(0);
+    expect(handleEngineMessage({ id: 3, kind: "grid", scenario, detail: "no" }).response.ok).toBe(false);
+  });
+
   it("returns the scenario's issues instead of throwing", () => {
     const { response } = handleEngineMessage({ id: 8, kind: "sites", scenario: { version: 1 }, sites: [] });
     expect(response.ok).toBe(false);
