@@ -120,8 +120,13 @@ export interface ExposureResult {
   provenance: Provenance;
 }
 
-/** Float accumulators for one computation. */
+/**
+ * Float accumulators for one computation: fields of one object, not variables captured by the
+ * per-cell callback (V8 boxes every value written to a captured variable).
+ */
 interface Tallies {
+  /** People counted. */
+  people: number;
   /** [district + 1][class][band][alerted] for the primary channel; band index bands.length = "no alert". */
   joint: Float64Array;
   /** [channel][band][alerted]. */
@@ -151,6 +156,7 @@ export function computeExposureWith(engine: Engine, cells: PopulationCells, opti
     joint: new Float64Array(districtSlots * classes.length * bandSlots * 2),
     channels: new Float64Array(channels.length * bandSlots * 2),
     actions: new Float64Array(actions.length),
+    people: 0,
     needless: 0,
     late: 0,
     missed: 0,
@@ -160,7 +166,6 @@ export function computeExposureWith(engine: Engine, cells: PopulationCells, opti
   const mw = engine.scenario.source.mw;
   const magnitudeDiffers = engine.strategy.id === "source" && engine.strategy.updates.some((u) => u.mw !== mw);
   const bounds = engine.scale.classLowerBounds;
-  let total = 0;
   // Cells without people are skipped: they add nothing to any table.
   walkCells(
     engine,
@@ -168,7 +173,7 @@ export function computeExposureWith(engine: Engine, cells: PopulationCells, opti
     cells.lat,
     (i, v) => {
       const people = cells.population[i];
-      total += people;
+      t.people += people;
       const alerted = v.alert.alerted ? 1 : 0;
       const district = cells.district ? cells.district[i] : -1;
       const districtSlot = district >= 0 && district < districtNames.length ? district + 1 : 0;
@@ -195,7 +200,7 @@ export function computeExposureWith(engine: Engine, cells: PopulationCells, opti
     },
     (i) => cells.population[i] > 0,
   );
-  return summarize(engine, t, Math.round(total), { bands, classes, districtNames, actions });
+  return summarize(engine, t, Math.round(t.people), { bands, classes, districtNames, actions });
 }
 
 /** P(intensity ≥ `intensity`) at a place; 1 below every value, 0 above. */
