@@ -176,6 +176,8 @@ export const protectiveActions = sqliteTable("protective_actions", {
   id: integer("id").primaryKey({ autoIncrement: true }),
   name: text("name").notNull(),
   secondsNeeded: real("seconds_needed").notNull(),
+  /** The facility kinds the action is for (a school does not stop trains); null: every kind. */
+  facilityKinds: text("facility_kinds", { mode: "json" }).$type<FacilityKind[]>(),
   position: integer("position").notNull().default(0),
 });
 

@@ -1,5 +1,6 @@
 import type { ReactNode } from "react";
 import type { ExposureResult } from "@/lib/exposure/contracts";
+import { hasMisfit } from "@/lib/exposure/headline-figures";
 import { formatPeople, formatShare, formatWarningS } from "./format";
 import { bandStyles, classLabel, FACILITY_KIND_LABELS } from "./labels";
 
@@ -46,7 +47,7 @@ function Table({ caption, head, rows, foot, testId }: { caption: string; head: s
 export function CouncilTables({ exposure }: { exposure: ExposureResult }) {
   const styles = bandStyles(exposure.warningBands);
   const rows = exposure.classByBand.rows.filter((row) => row.total > 0);
-  const misfits = exposure.facilities.filter((f) => f.actionFits.some((fits) => !fits));
+  const misfits = exposure.facilities.filter(hasMisfit);
   return (
     <div className="space-y-6">
       <Table
@@ -85,7 +86,7 @@ export function CouncilTables({ exposure }: { exposure: ExposureResult }) {
             f.name,
             FACILITY_KIND_LABELS[f.kind] ?? f.kind,
             formatWarningS(f.warningS),
-            exposure.actions.filter((_, k) => !f.actionFits[k]).map((a) => a.name).join(", "),
+            exposure.actions.filter((_, k) => f.actionFits[k] === false).map((a) => a.name).join(", "),
           ])}
         />
       )}

@@ -67,8 +67,9 @@ export function ExposureTables({ exposure, csvBase }: { exposure: ExposureResult
       (action, k): Column<Row<"facilities">> => ({
         key: action.id,
         header: action.name,
-        value: (r) => (r.actionFits[k] ? 1 : 0),
-        render: (r) => (r.actionFits[k] ? "fits" : <span className="font-semibold">does not fit</span>),
+        value: (r) => (r.actionFits[k] === null ? -1 : r.actionFits[k] ? 1 : 0),
+        render: (r) =>
+          r.actionFits[k] === null ? <span className="text-ink-muted">not for this kind</span> : r.actionFits[k] ? "fits" : <span className="font-semibold">does not fit</span>,
       }),
     ),
   ];

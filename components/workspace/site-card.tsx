@@ -2,7 +2,9 @@
 
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
+import { FACILITY_KIND_LABELS } from "@/components/exposure/labels";
 import { intensityClassName } from "@/lib/colour/legends";
+import { actionIsFor } from "@/lib/exposure/inputs";
 import { actionsThatFit, describeProvenance, type IntensityScaleId, type Provenance, type SiteResult } from "@/lib/geo";
 import { formatIntensity, formatKm, formatMotion, formatTimeS, formatWarningS } from "@/lib/workspace/format";
 import type { LonLat } from "@/lib/workspace/rupture-trace";
@@ -13,6 +15,8 @@ import { NumberField } from "./fields";
 export interface WorkspaceAction {
   name: string;
   secondsNeeded: number;
+  /** The facility kinds it is for; null: every kind. */
+  facilityKinds: readonly string[] | null;
 }
 
 /** A facility the planner can pick for the card. */
@@ -110,7 +114,10 @@ export function SiteCard({
   reactionTimeS: number;
   scale: IntensityScaleId;
 }) {
-  const fits = site ? actionsThatFit(site.warningS, site.alerted, reactionTimeS, actions.map((a) => ({ id: a.name, seconds: a.secondsNeeded }))) : [];
+  // A picked facility is judged by the actions meant for its kind; any other point by every action.
+  const facility = point ? facilities.find((f) => f.lon === point.lon && f.lat === point.lat) : undefined;
+  const meant = actions.filter((a) => actionIsFor(a, facility?.kind ?? null));
+  const fits = site ? actionsThatFit(site.warningS, site.alerted, reactionTimeS, meant.map((a) => ({ id: a.name, seconds: a.secondsNeeded }))) : [];
   return (
     <div className="space-y-3" data-testid="site-card">
       <PointPicker key={point ? `${point.lon},${point.lat}` : "none"} point={point} onPick={onPick} facilities={facilities} />
@@ -170,9 +177,10 @@ export function SiteCard({
           )}
           <div className="space-y-1">
             <h3 className="text-xs font-semibold">Protective actions that fit (reaction {reactionTimeS} s, primary channel)</h3>
+            {facility && <p className="text-xs text-ink-muted">Only the actions meant for this kind of facility ({FACILITY_KIND_LABELS[facility.kind] ?? facility.kind}).</p>}
             {fits.length === 0 ? (
               <p className="text-sm" data-testid="site-actions-none">
-                {site.alerted ? "None: the warning is too short." : "None: this place is not alerted."}
+                {meant.length === 0 ? "None: no action of the workspace list is meant for this kind." : site.alerted ? "None: the warning is too short." : "None: this place is not alerted."}
               </p>
             ) : (
               <ul className="list-disc pl-5 text-sm" data-testid="site-actions">

@@ -48,7 +48,7 @@ export async function readWorkspaceExposureSettings({ db }: { db?: Database } = 
   return {
     reactionTimeS: values.reactionTimeS ?? DEFAULT_SETTINGS.reactionTimeS,
     intensityScale: values.intensityScale ?? DEFAULT_SETTINGS.intensityScale,
-    actions: actions.map((a) => ({ id: `action-${a.id}`, name: a.name, secondsNeeded: a.secondsNeeded })),
+    actions: actions.map((a) => ({ id: `action-${a.id}`, name: a.name, secondsNeeded: a.secondsNeeded, facilityKinds: a.facilityKinds ?? null })),
   };
 }
 

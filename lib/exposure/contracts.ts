@@ -64,8 +64,11 @@ const facilityRowSchema = z.object({
   intensityClass: z.string(),
   /** Share of the facility that is alerted, 0–1 (points: 0 or 1). */
   alertedShare: z.number(),
-  /** Per action of `actions`, in that order: fits when the whole facility is alerted and warning ≥ reaction + seconds. */
-  actionFits: z.array(z.boolean()),
+  /**
+   * Per action of `actions`, in that order: fits when the whole facility is alerted and warning ≥
+   * reaction + seconds; null when the action is not for this kind of facility.
+   */
+  actionFits: z.array(z.boolean().nullable()),
 });
 export type FacilityRow = z.infer<typeof facilityRowSchema>;
 

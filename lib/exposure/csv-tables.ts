@@ -62,7 +62,7 @@ export function exposureCsv(exposure: ExposureResult, table: ExposureCsvTable): 
           "alerted share (0-1)",
           ...exposure.actions.map((a) => `fits: ${a.name} (${a.secondsNeeded} s)`),
         ],
-        exposure.facilities.map((f) => [f.name, f.kind, f.geometry, f.lengthKm, f.warningS, f.intensity, f.intensityClass, f.alertedShare, ...f.actionFits]),
+        exposure.facilities.map((f) => [f.name, f.kind, f.geometry, f.lengthKm, f.warningS, f.intensity, f.intensityClass, f.alertedShare, ...f.actionFits.map((fits) => fits ?? "not for this kind")]),
       );
   }
 }

@@ -2,7 +2,7 @@ import { actionFits, evaluateFacilities, getIntensityScale, type EngineOptions, 
 import { resolveScenario } from "@/lib/scenario/resolve";
 import type { Scenario } from "@/lib/scenario/schema";
 import type { FacilityRow } from "./contracts";
-import type { WorkspaceAction } from "./inputs";
+import { actionIsFor, type WorkspaceAction } from "./inputs";
 
 /** Rail lines are sampled this often along their geodesics (the issue asks for ≤ 0.5 km). */
 export const LINE_SAMPLE_STEP_KM = 0.5;
@@ -16,9 +16,10 @@ export interface StoredFacility {
 }
 
 /**
- * Each facility with its warning seconds, intensity and which actions fit. A line counts by its
- * worst sample (shortest warning, strongest shaking); an action fits on a line only when every
- * sample is alerted, since a train cannot stop on the stretch that got no alert.
+ * Each facility with its warning seconds, intensity and which actions fit (null where an action is
+ * not for the facility's kind). A line counts by its worst sample (shortest warning, strongest
+ * shaking); an action fits on a line only when every sample is alerted, since a train cannot stop
+ * on the stretch that got no alert.
  */
 export function facilityRows(
   scenario: Scenario,
@@ -36,8 +37,10 @@ export function facilityRows(
     { ...options, stepKm: LINE_SAMPLE_STEP_KM },
   );
   const scale = getIntensityScale(resolveScenario(scenario).intensityScale);
-  const fits = (warningS: number | null, alertedShare: number) =>
-    options.actions.map((action) => alertedShare === 1 && warningS !== null && actionFits(warningS, options.reactionTimeS, { id: action.id, seconds: action.secondsNeeded }));
+  const fits = (kind: string, warningS: number | null, alertedShare: number) =>
+    options.actions.map((action) =>
+      actionIsFor(action, kind) ? alertedShare === 1 && warningS !== null && actionFits(warningS, options.reactionTimeS, { id: action.id, seconds: action.secondsNeeded }) : null,
+    );
 
   const byId = new Map<string, FacilityRow>();
   result.points.forEach((site, k) => {
@@ -53,7 +56,7 @@ export function facilityRows(
       intensity: site.intensity,
       intensityClass: site.intensityClass,
       alertedShare,
-      actionFits: fits(site.warningS, alertedShare),
+      actionFits: fits(f.kind, site.warningS, alertedShare),
     });
   });
   result.lines.forEach((line, k) => {
@@ -68,7 +71,7 @@ export function facilityRows(
       intensity: line.maxIntensity,
       intensityClass: scale.classes[scale.classIndex(line.maxIntensity)],
       alertedShare: line.alertedShare,
-      actionFits: fits(line.minWarningS, line.alertedShare),
+      actionFits: fits(f.kind, line.minWarningS, line.alertedShare),
     });
   });
   // Keep the layer's own order.

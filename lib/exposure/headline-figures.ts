@@ -7,9 +7,14 @@ export const HEADLINE_KEYS = {
   facilities: "facilitiesActionMisfit",
 } as const;
 
-/** Facilities where at least one action of the workspace list does not fit. */
+/** Whether an action meant for the facility does not fit there (actions for other kinds are null and do not count). */
+export function hasMisfit(facility: Pick<ExposureResult["facilities"][number], "actionFits">): boolean {
+  return facility.actionFits.some((fits) => fits === false);
+}
+
+/** Facilities where at least one action meant for them does not fit. */
 export function facilitiesWithMisfit(facilities: ExposureResult["facilities"]): number {
-  return facilities.filter((f) => f.actionFits.some((fits) => !fits)).length;
+  return facilities.filter(hasMisfit).length;
 }
 
 /**

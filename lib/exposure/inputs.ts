@@ -8,6 +8,13 @@ export interface WorkspaceAction {
   name: string;
   /** Seconds the action takes once started. */
   secondsNeeded: number;
+  /** The facility kinds it is for; null: every kind. */
+  facilityKinds: readonly string[] | null;
+}
+
+/** Whether an action is for a facility of `kind`; every action is for a place that is not a facility (`kind` null). */
+export function actionIsFor(action: Pick<WorkspaceAction, "facilityKinds">, kind: string | null): boolean {
+  return kind === null || action.facilityKinds === null || action.facilityKinds.includes(kind);
 }
 
 /** Workspace settings that change exposure figures (table settings). */

@@ -8,14 +8,8 @@ import { LeewayError } from "@/lib/errors";
 import type { PopulationCells, ProvenanceContext, Vs30Cells } from "@/lib/geo";
 import type { IntensityScaleId } from "@/lib/geo/intensity/scales";
 import type { StoredFacility } from "@/lib/exposure/facility-rows";
+import type { WorkspaceAction } from "@/lib/exposure/inputs";
 import { parseScenario, type Scenario } from "@/lib/scenario/schema";
-
-/** A protective action of the workspace list. */
-export interface ExportAction {
-  id: string;
-  name: string;
-  secondsNeeded: number;
-}
 
 /** One scenario version, checked for the caller, with what every export reads. */
 export interface ExportSource {
@@ -31,7 +25,7 @@ export interface ExportSource {
   /** The workspace's intensity scale (settings), used when the file names none. */
   workspaceScale: IntensityScaleId;
   reactionTimeS: number;
-  actions: ExportAction[];
+  actions: WorkspaceAction[];
   /** Stored layer version ids by role (population, siteCondition, facilities, …). */
   layerVersionIds: Record<string, number>;
   /** For the "how it was made" line. */

@@ -2,11 +2,13 @@
 // sees it — one or two A4 pages, real text with the site, the warning per channel, the actions,
 // the exercise marking, the caution and the "how it was made" line.
 import { app, type Fixture } from "../support/app";
+import { eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it } from "vitest";
-import { protectiveActions, scenarioVersions, settings } from "@/db/schema";
+import { facilities, protectiveActions, scenarioVersions, settings } from "@/db/schema";
 import { CAUTION } from "@/lib/caution";
 import { timelineEvents } from "@/lib/exports/handout/timeline-events";
 import { layoutTimeline, tickStepS } from "@/lib/exports/handout/timeline-layout";
+import { insertFacilitiesVersion } from "../exposure/fixture";
 import { getExport } from "./export-routes";
 import { readPdf } from "./read-pdf";
 
@@ -116,6 +118,23 @@ describe("the handout PDF", () => {
       expect(pageText).toContain("How it was made: Leeway");
     }
     expect(await app.count("export_log")).toBe(1);
+  });
+
+  it("for a facility lists only the actions meant for its kind; for a typed point, every action", async () => {
+    await app.db.update(protectiveActions).set({ facilityKinds: ["rail"] }).where(eq(protectiveActions.name, "Slow and stop trains"));
+    const facilitiesVersionId = await insertFacilitiesVersion([{ name: "Eastbank primary school", kind: "school", geometry: { type: "Point", coordinates: [150.6, -30.1] } }]);
+    await app.db.update(scenarioVersions).set({ layerVersions: { facilities: facilitiesVersionId } }).where(eq(scenarioVersions.number, 4));
+    const [school] = await app.db.select({ id: facilities.id }).from(facilities);
+    app.signInAs("trainer");
+    const textOf = async (query: string) => {
+      const response = await getExport("handout", fixture.scenarioId, 4, query);
+      expect(response.status).toBe(200);
+      return (await readPdf(new Uint8Array(await response.arrayBuffer()))).map((p) => p.text).join(" ").replace(/\s+/g, " ");
+    };
+    const forSchool = await textOf(`?facility=${school.id}`);
+    expect(forSchool).toContain("Drop, cover, hold");
+    expect(forSchool).not.toContain("Slow and stop trains");
+    expect(await textOf("?lon=150.6&lat=-30.1")).toContain("Slow and stop trains");
   });
 
   it("refuses a facility the version does not have (404), and a half-given point (400), writing nothing", async () => {

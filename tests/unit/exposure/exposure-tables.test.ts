@@ -5,6 +5,7 @@ import { app } from "../support/app";
 import { eq } from "drizzle-orm";
 import { beforeEach, describe, expect, it } from "vitest";
 import { resultCache, scenarioVersions, settings } from "@/db/schema";
+import { exposureCsv } from "@/lib/exposure/csv-tables";
 import { exposureOf, loadVersion } from "@/lib/exposure/service";
 import { homogeneousScenario, EPICENTRE, destination, VS_KMS } from "../../verification/scenario-fixtures";
 import { cellsEast, insertFacilitiesVersion, insertPopulationVersion, insertScenario, setWorkspace } from "./fixture";
@@ -38,8 +39,9 @@ async function exampleVersion() {
     { name: "South line", kind: "rail", geometry: { type: "LineString", coordinates: [railStart, railEnd] } },
   ]);
   await setWorkspace(2, [
-    { name: "Drop, cover, hold", secondsNeeded: 5 },
-    { name: "Leave a ground-floor building", secondsNeeded: 15 },
+    { name: "Drop, cover, hold", secondsNeeded: 5, facilityKinds: ["school", "hospital"] },
+    { name: "Leave a ground-floor building", secondsNeeded: 15, facilityKinds: ["school", "hospital"] },
+    { name: "Slow and stop trains", secondsNeeded: 30, facilityKinds: ["rail"] },
   ]);
   const { scenarioId } = await insertScenario("Hand-worked", [
     { params: homogeneousScenario(), layerVersions: { population: population.layerVersionId, facilities: facilitiesVersionId }, state: "published" },
@@ -93,10 +95,11 @@ describe("exposure of a hand-worked four-cell version", () => {
     const { scenarioId } = await exampleVersion();
     const { exposure } = await exposureOf(await loadVersion({ scenarioId, number: 1 }));
     // Drop (5 s) needs ≥ 7 s: the 80 km cell (13.03 s); the 150 km cell has 32.95 s but is not alerted.
-    // Leaving (15 s) needs ≥ 17 s: no alerted cell has that long.
+    // Leaving (15 s) needs ≥ 17 s and stopping trains (30 s) ≥ 32 s: no alerted cell has that long.
     expect(exposure.actions.map((a) => [a.name, a.population])).toEqual([
       ["Drop, cover, hold", 300],
       ["Leave a ground-floor building", 0],
+      ["Slow and stop trains", 0],
     ]);
   });
 
@@ -105,9 +108,9 @@ describe("exposure of a hand-worked four-cell version", () => {
     const { exposure } = await exposureOf(await loadVersion({ scenarioId, number: 1 }));
     const [school, rail] = exposure.facilities;
     // School at 60 km: r = √(3600 + 100) = 60.83 km, warning = 60.83/3.5 − 10.0046 = 7.375 s;
-    // drop fits (7.375 ≥ 2 + 5), leaving does not (< 2 + 15).
+    // drop fits (7.375 ≥ 2 + 5), leaving does not (< 2 + 15); stopping trains is not for a school.
     expect(school.warningS).toBeCloseTo(warningAtKm(60), 2);
-    expect(school.actionFits).toEqual([true, false]);
+    expect(school.actionFits).toEqual([true, false, null]);
     // Rail 20–45 km: shortest warning at the 20 km end, r = 22.36 km → 6.389 − 10.0046 = −3.616 s (blind);
     // strongest shaking there: log PGV600 = 2.518 − log(27.34) − 0.0447 = 1.0365, + 0.1126 → I = 2.68 + 1.72·1.1491 = 4.656 (5-).
     expect(rail.geometry).toBe("line");
@@ -115,9 +118,29 @@ describe("exposure of a hand-worked four-cell version", () => {
     expect(rail.warningS).toBeCloseTo(warningAtKm(20), 2);
     expect(rail.intensity).toBeCloseTo(4.656, 1);
     expect(rail.intensityClass).toBe("5-");
-    expect(rail.actionFits).toEqual([false, false]);
-    // Headline: both facilities have an action that does not fit.
+    expect(rail.actionFits).toEqual([null, null, false]);
+    // Headline: both facilities have an action meant for them that does not fit.
     expect(exposure.headline.map((f) => f.value)).toEqual([101, 300, 2]);
+  });
+
+  it("facilities: an action meant for other kinds is not counted as one that does not fit", async () => {
+    const { scenarioId } = await exampleVersion();
+    // Only the drop (fits at the school, 7.375 s ≥ 7 s) and the trains (blind on the line) remain.
+    await setWorkspace(2, [
+      { name: "Drop, cover, hold", secondsNeeded: 5, facilityKinds: ["school"] },
+      { name: "Slow and stop trains", secondsNeeded: 30, facilityKinds: ["rail"] },
+    ]);
+    const { exposure } = await exposureOf(await loadVersion({ scenarioId, number: 1 }));
+    expect(exposure.facilities.map((f) => f.actionFits)).toEqual([
+      [true, null],
+      [null, false],
+    ]);
+    expect(exposure.headline.find((f) => f.key === "facilitiesActionMisfit")?.value).toBe(1);
+    const { rows } = exposureCsv(exposure, "facilities");
+    expect(rows.map((row) => row.slice(-2))).toEqual([
+      [true, "not for this kind"],
+      ["not for this kind", false],
+    ]);
   });
 
   it("the blind-zone area is within 2 % of the closed form π·Δ² (METHODS.md §2)", async () => {

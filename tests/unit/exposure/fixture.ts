@@ -1,7 +1,7 @@
 // Rows for exposure tests, written into the app harness's database: a population layer version
 // from cells, a facilities layer, workspace settings and actions, and scenario versions.
 import { packGridChunks } from "@/db/grid-codec";
-import { facilities, gridChunks, layers, layerVersions, protectiveActions, scenarios, scenarioVersions, settings, type ScenarioState } from "@/db/schema";
+import { facilities, gridChunks, layers, layerVersions, protectiveActions, scenarios, scenarioVersions, settings, type FacilityKind, type ScenarioState } from "@/db/schema";
 import type { Scenario } from "@/lib/scenario/schema";
 import { app } from "../support/app";
 import { EPICENTRE, destination, homogeneousScenario } from "../../verification/scenario-fixtures";
@@ -52,7 +52,7 @@ export async function insertFacilitiesVersion(features: { name: string; kind: "s
 }
 
 /** Workspace reaction time and protective actions (list order as given). */
-export async function setWorkspace(reactionTimeS: number, actions: { name: string; secondsNeeded: number }[]) {
+export async function setWorkspace(reactionTimeS: number, actions: { name: string; secondsNeeded: number; facilityKinds?: FacilityKind[] }[]) {
   await app.db.insert(settings).values({ key: "reactionTimeS", value: reactionTimeS }).onConflictDoUpdate({ target: settings.key, set: { value: reactionTimeS } });
   await app.db.delete(protectiveActions);
   if (actions.length) await app.db.insert(protectiveActions).values(actions.map((a, position) => ({ ...a, position })));

@@ -56,6 +56,11 @@ describe("demo seed", () => {
     expect(afterFirst.users).toHaveLength(4);
     expect(afterFirst.scenarios).toHaveLength(3);
     expect(afterFirst.layers.map((l) => l.kind).sort()).toEqual(["districts", "facilities", "population", "site-condition", "stations"]);
+    // Each default action names the facilities it is for: trains are stopped on rail, not at schools.
+    const kindsOf = (name: string) => afterFirst.protectiveActions.find((a) => a.name === name)?.facilityKinds;
+    expect(kindsOf("Slow and stop trains")).toEqual(["rail"]);
+    expect(kindsOf("Stop surgery and secure patients")).toEqual(["hospital"]);
+    expect(kindsOf("Drop, cover, hold")).not.toContain("rail");
   }, 60_000);
 
   it("creates one demo account per role whose password checks with bcrypt (cost 10)", async () => {

@@ -4,6 +4,7 @@ import { CAUTION } from "@/lib/caution";
 import { LeewayError } from "@/lib/errors";
 import { describeProvenance, evaluateFacilities, evaluateSites, getIntensityScale, prepareEngine } from "@/lib/geo";
 import { downloadName } from "@/lib/exports/download-name";
+import { actionIsFor } from "@/lib/exposure/inputs";
 import { handoutContent } from "@/lib/exports/handout/handout-content";
 import { renderHandoutPdf } from "@/lib/exports/handout/handout-pdf";
 import { beginExport, type ExportRouteContext } from "@/lib/exports/server/begin-export";
@@ -58,7 +59,8 @@ export const GET = route(async (request, context: ExportRouteContext) => {
     timeline: { detectionS: engine.timeline.detectionS, ...resolved.timing },
     intensityScaleLabel: getIntensityScale(resolved.intensityScale).label,
     reactionTimeS: source.reactionTimeS,
-    actions: source.actions,
+    // A typed point is no facility: every action is listed for it.
+    actions: source.actions.filter((a) => actionIsFor(a, site.kind === "point" ? null : site.kind)),
     notes: engine.notes,
     caution: CAUTION,
     howItWasMade: describeProvenance(engine.provenance),
