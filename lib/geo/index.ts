@@ -49,6 +49,7 @@ export { growingMagnitudeAt, growingMagnitudeUpdates } from "./strategy/growing-
 export { evaluateFacilities, type LineFacility, type LineResult, type FacilitiesResult } from "./facilities";
 export { actionFits, actionsThatFit } from "./actions";
 export { prepareEngine, type Engine, type EngineOptions } from "./engine";
+export type { StationPick } from "./timeline";
 export { CAUTION, LEEWAY_VERSION, describeProvenance, type Provenance, type ProvenanceContext } from "./provenance";
 export { gridGeometry, cellAreaKm2, columnLonDeg, rowLatDeg, type Bbox, type GridGeometry } from "./grid-geometry";
 export { geodesicDistanceKm, geodesicInverse, lambertDistanceKm, lambertDistancesKm } from "./distance";

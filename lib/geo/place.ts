@@ -8,15 +8,11 @@ import type { SourceDistances } from "./source/types";
 import { createPlaceAlert, type PlaceAlert, type PlaceAlertEvaluator, type PlaceContext } from "./strategy/types";
 import { probabilityOfExceedance } from "./uncertainty";
 
-/** Values for one place (s after origin, km, cm/s, intensity on the scenario's scale). */
+/**
+ * Values for one place (s after origin, km, cm/s, intensity on the scenario's scale): the
+ * distances, the context a strategy reads (position, model distance, Vs30, intensity), and these.
+ */
 export interface PlaceValues extends SourceDistances, PlaceContext {
-  lonDeg: number;
-  latDeg: number;
-  epicentralKm: number;
-  eastKm: number;
-  northKm: number;
-  /** The ground-motion model's distance (rupture or Joyner–Boore), km. */
-  modelDistanceKm: number;
   pArrivalS: number;
   /** First S arrival, s. */
   sArrivalS: number;
@@ -24,9 +20,7 @@ export interface PlaceValues extends SourceDistances, PlaceContext {
   peakShakingS: number;
   /** True when the first S is a head wave (Sn): warning errs on the short side. */
   sIsHeadWave: boolean;
-  vs30Ms: number;
   log10PgvCms: number;
-  intensity: number;
   /** Beyond the model's data (distance or magnitude). */
   extrapolated: boolean;
   alert: PlaceAlert;

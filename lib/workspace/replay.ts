@@ -4,18 +4,11 @@
  * engine (prepareEngine: its alert timeline and travel-time tables), so replay times are the same
  * ones the grid and the site card use.
  */
-import { lambertDistanceKm, pointAtOffset, prepareEngine } from "@/lib/geo";
+import { lambertDistanceKm, pointAtOffset, prepareEngine, type StationPick } from "@/lib/geo";
 import type { Scenario } from "@/lib/scenario/schema";
 
-/** A station in the replay: distance from the epicentre and when it picks the P wave. */
-export interface ReplayStation {
-  id: string;
-  lon: number;
-  lat: number;
-  epicentralKm: number;
-  pArrivalS: number;
-  operating: boolean;
-}
+/** A station in the replay: the alert timeline's pick (distance from the epicentre and P arrival). */
+export type ReplayStation = StationPick;
 
 /** Everything the replay draws. Times in s after origin, distances epicentral km. */
 export interface ReplayModel {

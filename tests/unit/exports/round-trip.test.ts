@@ -53,6 +53,20 @@ async function insertLayers(fixture: Fixture) {
   return { siteCondition, population, cells, people, district };
 }
 
+/** The layers, and version 4 of the fixture scenario: the round-trip file, shared, recording both layers. */
+async function insertSharedVersion(fixture: Fixture) {
+  const layerIds = await insertLayers(fixture);
+  await app.db.insert(scenarioVersions).values({
+    scenarioId: fixture.scenarioId,
+    number: 4,
+    params: FILE,
+    layerVersions: { population: layerIds.population, siteCondition: layerIds.siteCondition },
+    state: "shared",
+    authorId: fixture.people.planner.id,
+  });
+  return layerIds;
+}
+
 describe("scenario file round trip", () => {
   let fixture: Fixture;
   beforeEach(async () => {
@@ -60,15 +74,7 @@ describe("scenario file round trip", () => {
   });
 
   it("exports a file that, imported, gives byte-identical exposure tables", async () => {
-    const layerIds = await insertLayers(fixture);
-    await app.db.insert(scenarioVersions).values({
-      scenarioId: fixture.scenarioId,
-      number: 4,
-      params: FILE,
-      layerVersions: { population: layerIds.population, siteCondition: layerIds.siteCondition },
-      state: "shared",
-      authorId: fixture.people.planner.id,
-    });
+    await insertSharedVersion(fixture);
 
     // The trainer exports the scenario file of the shared version.
     app.signInAs("trainer");
@@ -103,15 +109,7 @@ describe("scenario file round trip", () => {
   });
 
   it("computes the same tables from the file alone, without any layer for site conditions", async () => {
-    const layerIds = await insertLayers(fixture);
-    await app.db.insert(scenarioVersions).values({
-      scenarioId: fixture.scenarioId,
-      number: 4,
-      params: FILE,
-      layerVersions: { population: layerIds.population, siteCondition: layerIds.siteCondition },
-      state: "shared",
-      authorId: fixture.people.planner.id,
-    });
+    const layerIds = await insertSharedVersion(fixture);
     app.signInAs("planner");
     const exported = JSON.parse(await (await getExport("scenario-file", fixture.scenarioId, 4)).text());
     const parsed = parseScenario(exported);

@@ -4,17 +4,8 @@ import { readPopulationCsv, readSiteConditionCsv } from "@/lib/layers/grid-csv";
 import { LayerFileError } from "@/lib/layers/layer-file-error";
 import { MAX_LISTED_ISSUES } from "@/lib/layers/limits";
 import { readFacilitiesCsv, readStationsCsv } from "@/lib/layers/point-csv";
-import { fixtureBytes, fixtureText } from "./fixtures";
+import { fixtureBytes, fixtureText, refusal } from "./fixtures";
 
-/** The refusal a reader throws, for checking its message and issues. */
-async function refusal(promise: Promise<unknown>): Promise<LayerFileError> {
-  const error = await promise.then(
-    () => undefined,
-    (e: unknown) => e,
-  );
-  expect(error).toBeInstanceOf(LayerFileError);
-  return error as LayerFileError;
-}
 
 describe("population CSV", () => {
   it("reads lon, lat, population and district names; totals match the file (1200 + 850 + 0 + 2300 + 410 = 4760, summed by hand)", async () => {

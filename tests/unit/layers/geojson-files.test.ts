@@ -1,16 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { readDistrictsGeojson, readFacilitiesGeojson } from "@/lib/layers/geojson-layers";
-import { LayerFileError } from "@/lib/layers/layer-file-error";
-import { fixtureText } from "./fixtures";
+import { fixtureText, refusal } from "./fixtures";
 
-async function refusal(promise: Promise<unknown>): Promise<LayerFileError> {
-  const error = await promise.then(
-    () => undefined,
-    (e: unknown) => e,
-  );
-  expect(error).toBeInstanceOf(LayerFileError);
-  return error as LayerFileError;
-}
 
 function collection(features: unknown[]): string {
   return JSON.stringify({ type: "FeatureCollection", features });
