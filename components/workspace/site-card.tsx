@@ -4,7 +4,7 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FACILITY_KIND_LABELS } from "@/components/exposure/labels";
 import { intensityClassName } from "@/lib/colour/legends";
-import { actionIsFor } from "@/lib/exposure/inputs";
+import { actionIsFor, type WorkspaceAction } from "@/lib/exposure/inputs";
 import { actionsThatFit, describeProvenance, type IntensityScaleId, type Provenance, type SiteResult } from "@/lib/geo";
 import { formatIntensity, formatKm, formatMotion, formatTimeS, formatWarningS } from "@/lib/workspace/format";
 import type { LonLat } from "@/lib/workspace/rupture-trace";
@@ -12,13 +12,6 @@ import { channelName } from "./alert-rules-form";
 import { NumberField } from "./fields";
 
 /** A protective action and the seconds it takes (workspace settings). */
-export interface WorkspaceAction {
-  name: string;
-  secondsNeeded: number;
-  /** The facility kinds it is for; null: every kind. */
-  facilityKinds: readonly string[] | null;
-}
-
 /** A facility the planner can pick for the card. */
 export interface PickableFacility {
   name: string;

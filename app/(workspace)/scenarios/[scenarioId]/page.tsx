@@ -103,7 +103,7 @@ export default async function ScenarioPage(props: {
         roleLabel={ROLE_LABELS[user.role]}
         workspaceScale={settings.intensityScale}
         reactionTimeS={settings.reactionTimeS}
-        actions={settings.actions.map((a) => ({ name: a.name, secondsNeeded: a.secondsNeeded, facilityKinds: a.facilityKinds }))}
+        actions={settings.actions}
         layers={layers}
       />
       <ScenarioExports scenarioId={scenario.id} versionNumber={version.number} canExportFiles={can(user.role, "export:files")} />
